@@ -1,0 +1,120 @@
+// Syntax tree of the couplet language (grammar/couplet.ebnf).  Plain data: no semantics here;
+// lowering to GiNaC lives in src/model.  Every node that can be blamed for an error carries
+// the byte offset of its first character in the source text.
+#pragma once
+
+#include <boost/spirit/home/x3/support/ast/variant.hpp>
+#include <cstddef>
+#include <list>
+#include <string>
+#include <vector>
+
+namespace couplet::ast {
+
+namespace x3 = boost::spirit::x3;
+
+struct located {
+    std::size_t offset = 0;
+};
+
+struct nil {};
+struct number;
+struct identifier;
+struct call;
+struct bracket_symbol;
+struct clebsch_gordan;
+struct sum;
+struct negated;
+struct expression;
+
+struct operand
+    : x3::variant<nil, x3::forward_ast<number>, x3::forward_ast<identifier>, x3::forward_ast<call>,
+                  x3::forward_ast<bracket_symbol>, x3::forward_ast<clebsch_gordan>,
+                  x3::forward_ast<sum>, x3::forward_ast<negated>, x3::forward_ast<expression>> {
+    using base_type::base_type;
+    using base_type::operator=;
+};
+
+// An integer literal; the digits are kept as text so that big integers stay exact.
+struct number : located {
+    std::string digits;
+};
+
+struct identifier : located {
+    std::string name;
+};
+
+struct operation : located {
+    char op = '+';  // one of + - * / ^
+    operand rhs;
+};
+
+// A left-to-right chain `first op rhs op rhs ...` at one precedence level; the parser nests
+// chains so that precedence and associativity are already resolved in the tree.
+struct expression : located {
+    operand first;
+    std::list<operation> rest;
+};
+
+struct negated : located {
+    operand value;
+};
+
+// name(args): sqrt, delta, tri; the name is checked during lowering.
+struct call : located {
+    identifier function;
+    std::vector<expression> args;
+};
+
+// 3j(..; ..), 6j{..; ..}, 9j{..; ..; ..}: rows of entries, counted during lowering so that a
+// wrong count is reported with a position and a plain message.
+struct bracket_symbol : located {
+    std::string kind;  // "3j", "6j" or "9j"
+    std::vector<std::vector<expression>> rows;
+};
+
+// <j1 m1, j2 m2 | J M>
+struct clebsch_gordan : located {
+    operand j1, m1, j2, m2, j, m;
+};
+
+struct sum : located {
+    std::vector<identifier> indices;
+    expression body;
+};
+
+struct declaration : located {
+    std::string parity;  // "int" or "half"
+    std::vector<identifier> names;
+};
+
+struct definition : located {
+    identifier name;
+    expression value;
+};
+
+struct simplify_request : located {
+    expression value;
+};
+
+struct check_request : located {
+    expression lhs, rhs;
+};
+
+struct assignment : located {
+    identifier name;
+    expression value;
+};
+
+struct eval_request : located {
+    expression value;
+    std::vector<assignment> at;
+};
+
+struct statement : x3::variant<declaration, definition, check_request, eval_request,
+                               simplify_request> {
+    using base_type::base_type;
+    using base_type::operator=;
+};
+
+}  // namespace couplet::ast

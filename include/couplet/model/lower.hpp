@@ -1,0 +1,47 @@
+// Lowering: syntax tree -> GiNaC expressions over the program's quantum numbers.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <string>
+#include <vector>
+
+#include "couplet/model/quantum.hpp"
+#include "couplet/parse.hpp"
+
+namespace couplet {
+
+enum class request_kind { declaration, definition, simplify, check, eval };
+
+struct value_assignment {
+    GiNaC::symbol name;
+    GiNaC::numeric value;
+    std::size_t offset = 0;
+};
+
+struct lowered_statement {
+    request_kind kind = request_kind::simplify;
+    statement_span span;
+    std::string text;      // the statement's source text
+    bool bare = false;     // an expression or `A == B` without a keyword
+    GiNaC::ex value;       // simplify / eval / check left side / definition value
+    GiNaC::ex rhs;         // check right side
+    std::vector<value_assignment> at;  // eval ... at
+};
+
+struct lowered_program {
+    quantum_numbers numbers;
+    std::vector<lowered_statement> statements;
+};
+
+// Throws user_error for every semantic error (wrong entry counts, role conflicts, undefined
+// names, sum indices absent from their body, inadmissible `at` values, ...).
+lowered_program lower_program(const source_file& src, const std::vector<parsed_statement>& parsed);
+
+// parse + lower.
+lowered_program read_program(const source_file& src);
+
+// True when e is c0 + sum c_i * x_i with rational c's and symbols x_i.
+bool is_linear_form(const GiNaC::ex& e);
+
+}  // namespace couplet

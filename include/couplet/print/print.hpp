@@ -1,0 +1,18 @@
+// Printing expressions.  The order of terms and factors is fixed by couplet, never by GiNaC's
+// hash order, so output is identical across runs and machines.  Text output is valid input.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <string>
+
+namespace couplet {
+
+std::string to_text(const GiNaC::ex& e);
+// amsmath math-mode LaTeX (no surrounding $...$).
+std::string to_latex(const GiNaC::ex& e);
+// A quantum-number name as TeX: j12 -> j_{12}, J' -> J', lambda -> \lambda.  Only letters,
+// digits, primes and a fixed set of commands can appear in the result.
+std::string latex_identifier(const std::string& name);
+
+}  // namespace couplet

@@ -1,0 +1,139 @@
+#include "cli/run.hpp"
+
+#include <CLI/CLI.hpp>
+#include <fstream>
+#include <iostream>
+#include <sstream>
+
+#include "cli/execute.hpp"
+#include "cli/report.hpp"
+#include "couplet/model/lower.hpp"
+
+namespace couplet::cli {
+namespace {
+
+const char* const conventions_text = R"(Conventions:
+  Condon-Shortley phases: the ladder coefficients sqrt((j-+m)(j+-m+1)) are real and
+  non-negative, and <j1 j1, j2 J-j1 | J J> > 0.  All 3j and CG values are real.
+  <j1 m1, j2 m2 | J M> = (-1)^(j1-j2+M) sqrt(2J+1) 3j(j1, j2, J; m1, m2, -M).
+  Admissible values: j >= 0 in steps of 1/2; |m| <= j with j-m an integer; a triad (a, b, c)
+  needs |a-b| <= c <= a+b with a+b+c an integer.  A symbol whose numbers violate these is 0.
+
+Language (one statement per line or separated by ';'; '#' starts a comment):
+  int l, k | half s            declare integer / half-odd angular momenta
+  let W = EXPR                 name an expression
+  simplify EXPR   or  EXPR     simplify (a bare expression)
+  check A == B    or  A == B   decide whether A equals B
+  eval EXPR [at a=1/2, m=0]    exact value and a decimal
+  3j(j1, j2, j3; m1, m2, m3)   6j{a, b, c; d, e, f}   9j{a, b, c; d, e, f; g, h, i}
+  <j1 m1, j2 m2 | J M>         (-1)^(EXPR)  sqrt(EXPR)  delta(x, y)  tri(a, b, c)
+  sum(i, k : EXPR)             + - * / ^ and parentheses; numbers like 3 and 1/2
+
+Exit status: 0 done (every check holds), 1 a check fails, 2 bad input or a refused request.)";
+
+struct request {
+    std::string command, file, text, format = "text";
+    bool has_text = false, fragment = false;
+};
+
+std::string read_all(std::istream& in) {
+    std::ostringstream os;
+    os << in.rdbuf();
+    return os.str();
+}
+
+void add_common_options(CLI::App& sub, request& r) {
+    sub.add_option("FILE", r.file, "Input file, or - for standard input");
+    sub.add_option("-e,--expr", r.text, "Take the input from TEXT instead of a file");
+    sub.add_option("--format", r.format, "Output format")
+        ->check(CLI::IsMember({"text", "latex", "json"}));
+}
+
+}  // namespace
+
+int run(const std::vector<std::string>& args, std::istream& in, std::ostream& out, std::ostream& err) {
+    CLI::App app{"couplet: sums over magnetic quantum numbers of 3j and Clebsch-Gordan products,\n"
+                 "reduced and checked by exact arithmetic."};
+    app.footer(conventions_text);
+    app.require_subcommand(1, 1);
+    request r;
+    struct command_info {
+        const char* name;
+        const char* help;
+    };
+    const command_info commands[] = {
+        {"simplify", "Simplify each expression (currently: merges phases and collects factors)"},
+        {"check", "Decide each 'A == B'"},
+        {"eval", "Evaluate each expression exactly ('at' gives values)"},
+        {"latex", "Print the statements as a LaTeX document (amsmath)"},
+    };
+    for (const auto& c : commands) {
+        CLI::App* sub = app.add_subcommand(c.name, c.help);
+        add_common_options(*sub, r);
+        if (std::string(c.name) == "latex")
+            sub->add_flag("--fragment", r.fragment, "Print only the formulas, without the document around them");
+        sub->callback([&r, name = c.name] { r.command = name; });
+    }
+
+    std::vector<std::string> reversed(args.rbegin(), args.rend() - (args.empty() ? 0 : 1));
+    try {
+        app.parse(reversed);
+    } catch (const CLI::CallForHelp& e) {
+        out << app.help();
+        return ok;
+    } catch (const CLI::ParseError& e) {
+        if (e.get_exit_code() == 0) {
+            app.exit(e, out, err);
+            return ok;
+        }
+        err << "couplet: " << e.what() << "\n(run 'couplet --help' for usage)\n";
+        return bad_input;
+    }
+    for (CLI::App* sub : app.get_subcommands())
+        if (sub->count("--expr")) r.has_text = true;
+
+    std::string name = "<expression>", text;
+    if (r.has_text) {
+        if (!r.file.empty()) {
+            err << "couplet: give either FILE or -e TEXT, not both\n";
+            return bad_input;
+        }
+        text = r.text;
+    } else if (r.file.empty()) {
+        err << "couplet: no input: give a FILE, '-' for standard input, or -e TEXT\n";
+        return bad_input;
+    } else if (r.file == "-") {
+        name = "<stdin>";
+        text = read_all(in);
+    } else {
+        std::ifstream f(r.file, std::ios::binary);
+        if (!f) {
+            err << "couplet: cannot read '" << r.file << "'\n";
+            return bad_input;
+        }
+        name = r.file;
+        text = read_all(f);
+    }
+
+    reporter rep(r.command == "latex" ? (r.format == "json" ? "json" : "latex") : r.format,
+                 r.command == "latex" && !r.fragment && r.format != "json", out, err);
+    source_file src(name, text);
+    try {
+        lowered_program program = read_program(src);
+        bool any_failed = false;
+        bare_meaning bare = r.command == "eval" ? bare_meaning::eval : bare_meaning::simplify;
+        rep.begin();
+        for (const lowered_statement& s : program.statements) {
+            outcome o = execute(s, program, bare);
+            if (!o.record.is_null()) rep.statement(o.record);
+            any_failed = any_failed || o.check_failed;
+        }
+        rep.end();
+        return any_failed ? check_false : ok;
+    } catch (const user_error& e) {
+        rep.error(src, e);
+        return bad_input;
+    }
+}
+
+}  // namespace couplet::cli

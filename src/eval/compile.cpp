@@ -1,0 +1,248 @@
+#include "eval/compile.hpp"
+
+#include <algorithm>
+
+#include "couplet/model/lower.hpp"
+#include "couplet/model/symbols.hpp"
+#include "couplet/print/print.hpp"
+
+namespace couplet::eval_detail {
+
+using namespace GiNaC;
+
+namespace {
+
+cln::cl_RA rational_of(const numeric& n) { return cln::the<cln::cl_RA>(n.to_cl_N()); }
+
+class compiler {
+public:
+    compiler(program& p, const quantum_numbers& numbers) : p_(p), numbers_(numbers) {}
+
+    node_ptr build(const ex& e) {
+        auto n = std::make_unique<node>();
+        n->text = to_text(e);
+        if (is_a<numeric>(e)) {
+            const numeric& v = ex_to<numeric>(e);
+            if (!v.is_rational()) throw evaluation_error("the number " + n->text + " is not rational");
+            n->kind = node_kind::constant;
+            n->value = exact::number(rational_of(v));
+        } else if (is_a<symbol>(e)) {
+            n->kind = node_kind::variable;
+            n->slot = slot(ex_to<symbol>(e));
+        } else if (is_a<add>(e) || is_a<mul>(e)) {
+            n->kind = is_a<add>(e) ? node_kind::add : node_kind::mul;
+            for (const ex& c : e) n->children.push_back(build(c));
+        } else if (is_a<GiNaC::power>(e)) {
+            build_power(*n, e);
+        } else if (is_a<phase>(e)) {
+            n->kind = node_kind::phase;
+            n->forms.push_back(form(e.op(0)));
+        } else if (is_a<index_sum>(e)) {
+            build_sum(*n, ex_to<index_sum>(e));
+        } else {
+            build_symbol(*n, e);
+        }
+        return n;
+    }
+
+private:
+    int slot(const symbol& s) {
+        int k = ensure_slot(s);
+        note_free(k);
+        return k;
+    }
+
+    int ensure_slot(const symbol& s) {
+        auto it = p_.slot_of.find(s.get_name());
+        if (it != p_.slot_of.end()) return it->second;
+        int k = static_cast<int>(p_.slot_names.size());
+        p_.slot_of.emplace(s.get_name(), k);
+        p_.slot_names.push_back(s.get_name());
+        const quantum_number* q = numbers_.find(s);
+        p_.declared_parity.push_back(!q ? 0 : q->parity == qn_parity::integer ? 1
+                                          : q->parity == qn_parity::half_odd ? 2
+                                                                              : 0);
+        return k;
+    }
+
+    void note_free(int k) {
+        if (std::find(bound_.begin(), bound_.end(), k) != bound_.end()) return;
+        if (std::find(p_.free_slots.begin(), p_.free_slots.end(), k) == p_.free_slots.end())
+            p_.free_slots.push_back(k);
+    }
+
+    linear form(const ex& e) {
+        if (!is_linear_form(e)) throw evaluation_error("'" + to_text(e) + "' is not linear in the quantum numbers");
+        linear f;
+        f.text = to_text(e);
+        ex x = e.expand();
+        auto take = [&](const ex& t) {
+            if (is_a<numeric>(t)) {
+                f.constant += rational_of(ex_to<numeric>(t));
+            } else if (is_a<symbol>(t)) {
+                f.terms.emplace_back(slot(ex_to<symbol>(t)), 1);
+            } else {  // c * symbol
+                const ex& a = t.op(0);
+                const ex& b = t.op(1);
+                const ex& s = is_a<symbol>(a) ? a : b;
+                const ex& c = is_a<symbol>(a) ? b : a;
+                f.terms.emplace_back(slot(ex_to<symbol>(s)), rational_of(ex_to<numeric>(c)));
+            }
+        };
+        if (is_a<add>(x))
+            for (const ex& t : x) take(t);
+        else
+            take(x);
+        return f;
+    }
+
+    void build_power(node& n, const ex& e) {
+        if (!is_a<numeric>(e.op(1)) || !ex_to<numeric>(e.op(1)).is_rational())
+            throw evaluation_error("cannot evaluate " + n.text + " exactly");
+        numeric k = ex_to<numeric>(e.op(1));
+        n.children.push_back(build(e.op(0)));
+        if (k.is_integer()) {
+            n.kind = node_kind::power;
+            n.exponent = k.to_long();
+        } else if ((2 * k).is_integer()) {
+            n.kind = node_kind::root_power;
+            n.exponent = (2 * k).to_long();
+        } else {
+            throw evaluation_error("cannot evaluate " + n.text + " exactly: only integer powers and "
+                                   "square roots are supported");
+        }
+    }
+
+    void build_symbol(node& n, const ex& e) {
+        switch (kind_of(e)) {
+            case symbol_kind::threej: n.kind = node_kind::threej; break;
+            case symbol_kind::clebsch_gordan: n.kind = node_kind::clebsch; break;
+            case symbol_kind::sixj: n.kind = node_kind::sixj; break;
+            case symbol_kind::ninej: n.kind = node_kind::ninej; break;
+            case symbol_kind::delta: n.kind = node_kind::delta; break;
+            case symbol_kind::triangle: n.kind = node_kind::triangle; break;
+            default: throw evaluation_error("cannot evaluate " + n.text);
+        }
+        for (const ex& a : e) n.forms.push_back(form(a));
+    }
+
+    void build_sum(node& n, const index_sum& s) {
+        n.kind = node_kind::sum;
+        std::vector<int> outer_bound = bound_;
+        for (const ex& i : s.indices()) {
+            int k = ensure_slot(ex_to<symbol>(i));
+            n.indices.push_back(k);
+            bound_.push_back(k);
+        }
+        ex body = s.body();
+        std::vector<ex> parts;
+        if (is_a<add>(body))
+            for (const ex& t : body) parts.push_back(t);
+        else
+            parts.push_back(body);
+        for (const ex& t : parts) {
+            summand piece;
+            piece.body = build(t);
+            collect_rules(*piece.body, piece.rules);
+            n.terms.push_back(std::move(piece));
+        }
+        bound_ = outer_bound;
+    }
+
+    // Selection rules of the multiplicative factors: where one fails, that factor (and with
+    // it the whole summand) vanishes, so the rules may bound the enumeration exactly.
+    static void collect_rules(const node& n, std::vector<selection_rule>& rules) {
+        switch (n.kind) {
+            case node_kind::mul:
+                for (const auto& c : n.children) collect_rules(*c, rules);
+                return;
+            case node_kind::power:
+                if (n.exponent > 0) collect_rules(*n.children[0], rules);
+                return;
+            case node_kind::sum:
+                if (n.terms.size() == 1)
+                    rules.insert(rules.end(), n.terms[0].rules.begin(), n.terms[0].rules.end());
+                return;
+            case node_kind::threej:
+                triad(rules, n.forms[0], n.forms[1], n.forms[2]);
+                for (int k = 0; k < 3; ++k) projection(rules, n.forms[k], n.forms[3 + k]);
+                rules.push_back({rule_kind::zero, combine({{1, &n.forms[3]}, {1, &n.forms[4]}, {1, &n.forms[5]}})});
+                return;
+            case node_kind::clebsch:
+                triad(rules, n.forms[0], n.forms[2], n.forms[4]);
+                for (int k = 0; k < 3; ++k) projection(rules, n.forms[2 * k], n.forms[2 * k + 1]);
+                rules.push_back({rule_kind::zero, combine({{1, &n.forms[1]}, {1, &n.forms[3]}, {-1, &n.forms[5]}})});
+                return;
+            case node_kind::sixj: {
+                const auto& f = n.forms;  // {a b c; d e f}: (abc) (aef) (dbf) (dec)
+                triad(rules, f[0], f[1], f[2]);
+                triad(rules, f[0], f[4], f[5]);
+                triad(rules, f[3], f[1], f[5]);
+                triad(rules, f[3], f[4], f[2]);
+                return;
+            }
+            case node_kind::ninej: {
+                const auto& f = n.forms;
+                for (int r = 0; r < 3; ++r) triad(rules, f[3 * r], f[3 * r + 1], f[3 * r + 2]);
+                for (int c = 0; c < 3; ++c) triad(rules, f[c], f[3 + c], f[6 + c]);
+                return;
+            }
+            case node_kind::triangle:
+                triad(rules, n.forms[0], n.forms[1], n.forms[2]);
+                return;
+            case node_kind::delta:
+                rules.push_back({rule_kind::zero, combine({{1, &n.forms[0]}, {-1, &n.forms[1]}})});
+                return;
+            default: return;
+        }
+    }
+
+    static linear combine(std::initializer_list<std::pair<int, const linear*>> parts) {
+        linear out;
+        std::map<int, cln::cl_RA> acc;
+        for (const auto& [c, f] : parts) {
+            out.constant += c * f->constant;
+            for (const auto& [s, k] : f->terms) acc[s] += c * k;
+        }
+        for (const auto& [s, k] : acc)
+            if (!cln::zerop(k)) out.terms.emplace_back(s, k);
+        return out;
+    }
+
+    static void half_integral(std::vector<selection_rule>& rules, const linear& f) {
+        rules.push_back({rule_kind::integral, combine({{2, &f}})});
+    }
+
+    static void triad(std::vector<selection_rule>& rules, const linear& a, const linear& b, const linear& c) {
+        for (const linear* f : {&a, &b, &c}) {
+            rules.push_back({rule_kind::nonnegative, *f});
+            half_integral(rules, *f);
+        }
+        rules.push_back({rule_kind::nonnegative, combine({{1, &a}, {1, &b}, {-1, &c}})});
+        rules.push_back({rule_kind::nonnegative, combine({{1, &a}, {-1, &b}, {1, &c}})});
+        rules.push_back({rule_kind::nonnegative, combine({{-1, &a}, {1, &b}, {1, &c}})});
+        rules.push_back({rule_kind::integral, combine({{1, &a}, {1, &b}, {1, &c}})});
+    }
+
+    static void projection(std::vector<selection_rule>& rules, const linear& j, const linear& m) {
+        half_integral(rules, m);
+        rules.push_back({rule_kind::nonnegative, combine({{1, &j}, {-1, &m}})});
+        rules.push_back({rule_kind::nonnegative, combine({{1, &j}, {1, &m}})});
+        rules.push_back({rule_kind::integral, combine({{1, &j}, {-1, &m}})});
+    }
+
+    program& p_;
+    const quantum_numbers& numbers_;
+    std::vector<int> bound_;
+};
+
+}  // namespace
+
+program compile(const ex& e, const quantum_numbers& numbers) {
+    program p;
+    compiler c(p, numbers);
+    p.root = c.build(e);
+    return p;
+}
+
+}  // namespace couplet::eval_detail

@@ -1,0 +1,10 @@
+#pragma once
+
+#include "couplet/eval/evaluate.hpp"
+#include "eval/compiled.hpp"
+
+namespace couplet::eval_detail {
+
+program compile(const GiNaC::ex& e, const quantum_numbers& numbers);
+
+}  // namespace couplet::eval_detail

@@ -1,0 +1,285 @@
+// Running a compiled expression: exact arithmetic, with summation indices enumerated over
+// exactly the values their selection rules admit.
+#include <cln/integer.h>
+#include <cln/rational.h>
+#include <cln/rational_io.h>
+
+#include <algorithm>
+#include <optional>
+#include <sstream>
+
+#include "couplet/exact/admissibility.hpp"
+#include "couplet/exact/wigner.hpp"
+#include "eval/compile.hpp"
+
+namespace couplet {
+
+using eval_detail::linear;
+using eval_detail::node;
+using eval_detail::node_kind;
+using eval_detail::rule_kind;
+using eval_detail::selection_rule;
+using eval_detail::summand;
+
+namespace {
+
+bool is_integer(const cln::cl_RA& q) { return cln::denominator(q) == 1; }
+
+std::string show(const cln::cl_RA& q) {
+    std::ostringstream os;
+    os << q;
+    return os.str();
+}
+
+class machine {
+public:
+    machine(const eval_detail::program& p, const evaluation_limits& limits)
+        : p_(p), limits_(limits), value_(p.slot_names.size()), known_(p.slot_names.size(), false) {}
+
+    void assign(int slot, const cln::cl_RA& v) {
+        value_[slot] = v;
+        known_[slot] = true;
+    }
+
+    exact::number run(const node& n) {
+        switch (n.kind) {
+            case node_kind::constant: return n.value;
+            case node_kind::variable: return exact::number(value_[n.slot]);
+            case node_kind::add: {
+                exact::number s;
+                for (const auto& c : n.children) s += run(*c);
+                return s;
+            }
+            case node_kind::mul: {
+                exact::number s(1L);
+                for (const auto& c : n.children) {
+                    s *= run(*c);
+                    if (s.is_zero()) break;
+                }
+                return s;
+            }
+            case node_kind::power: return exact::power(run(*n.children[0]), n.exponent);
+            case node_kind::root_power: {
+                exact::number base = run(*n.children[0]);
+                if (!base.is_rational() || cln::minusp(base.rational_value()))
+                    throw evaluation_error("sqrt of " + base.to_string() + " (in " + n.text +
+                                           ") is not a real square root of a rational");
+                return exact::power(exact::number::sqrt_of(base.rational_value()), n.exponent);
+            }
+            case node_kind::phase: {
+                cln::cl_RA x = value(n.forms[0]);
+                if (!is_integer(x))
+                    throw evaluation_error("the exponent of (-1)^(" + n.forms[0].text + ") is " + show(x) +
+                                           " here, not an integer");
+                return exact::number(cln::oddp(cln::the<cln::cl_I>(x)) ? -1L : 1L);
+            }
+            case node_kind::delta: return exact::number(value(n.forms[0]) == value(n.forms[1]) ? 1L : 0L);
+            case node_kind::triangle: return triangle_holds(n) ? exact::number(1L) : exact::number();
+            case node_kind::sum: return sum(n);
+            default: return coupling_symbol(n);
+        }
+    }
+
+private:
+    cln::cl_RA value(const linear& f) const {
+        cln::cl_RA v = f.constant;
+        for (const auto& [s, c] : f.terms) v = v + c * value_[s];
+        return v;
+    }
+
+    // 2*value as a long, or nothing when the value is not a multiple of 1/2.
+    std::optional<long> twice(const linear& f) const {
+        cln::cl_RA t = 2 * value(f);
+        if (!is_integer(t)) return std::nullopt;
+        cln::cl_I i = cln::the<cln::cl_I>(t);
+        if (cln::abs(i) > limits_.max_twice_j)
+            throw evaluation_error("'" + f.text + "' = " + show(value(f)) + " is too large (2j may be at most " +
+                                   std::to_string(limits_.max_twice_j) + ")");
+        return cln::cl_I_to_long(i);
+    }
+
+    bool triangle_holds(const node& n) const {
+        auto a = twice(n.forms[0]), b = twice(n.forms[1]), c = twice(n.forms[2]);
+        return a && b && c && exact::triangle(*a, *b, *c);
+    }
+
+    exact::number coupling_symbol(const node& n) {
+        long t[9];
+        for (std::size_t k = 0; k < n.forms.size(); ++k) {
+            auto v = twice(n.forms[k]);
+            if (!v) return exact::number();  // not a quantum number: the symbol vanishes
+            t[k] = *v;
+        }
+        switch (n.kind) {
+            case node_kind::threej: return exact::threej(t[0], t[1], t[2], t[3], t[4], t[5]);
+            case node_kind::clebsch: return exact::clebsch_gordan(t[0], t[1], t[2], t[3], t[4], t[5]);
+            case node_kind::sixj: return exact::sixj(t[0], t[1], t[2], t[3], t[4], t[5]);
+            default: return exact::ninej(t[0], t[1], t[2], t[3], t[4], t[5], t[6], t[7], t[8]);
+        }
+    }
+
+    exact::number sum(const node& n) {
+        // An index may share its name with a free quantum number used outside the sum.
+        std::vector<std::pair<cln::cl_RA, bool>> saved;
+        for (int i : n.indices) {
+            saved.emplace_back(value_[i], known_[i]);
+            known_[i] = false;
+        }
+        exact::number total;
+        for (const summand& s : n.terms) {
+            std::vector<int> open = n.indices;
+            total += enumerate(s, open);
+        }
+        for (std::size_t k = 0; k < n.indices.size(); ++k) {
+            value_[n.indices[k]] = saved[k].first;
+            known_[n.indices[k]] = saved[k].second;
+        }
+        return total;
+    }
+
+    bool evaluable(const linear& f, int except = -1) const {
+        for (const auto& [s, c] : f.terms)
+            if (s != except && !known_[s]) return false;
+        return true;
+    }
+
+    bool rule_holds(const selection_rule& r) const {
+        cln::cl_RA v = value(r.form);
+        switch (r.kind) {
+            case rule_kind::nonnegative: return !cln::minusp(v);
+            case rule_kind::zero: return cln::zerop(v);
+            default: return is_integer(v);
+        }
+    }
+
+    struct range {
+        std::optional<cln::cl_RA> low, high;
+    };
+
+    // Bounds on `slot` from the rules whose other quantum numbers are all known.
+    range bounds(const summand& s, int slot) const {
+        range r;
+        for (const selection_rule& rule : s.rules) {
+            if (rule.kind == rule_kind::integral || !evaluable(rule.form, slot)) continue;
+            cln::cl_RA c = 0;
+            for (const auto& [k, coeff] : rule.form.terms)
+                if (k == slot) c = c + coeff;
+            if (cln::zerop(c)) continue;
+            cln::cl_RA rest = rule.form.constant;
+            for (const auto& [k, coeff] : rule.form.terms)
+                if (k != slot) rest = rest + coeff * value_[k];
+            cln::cl_RA root = -rest / c;  // c*x + rest >= 0 (or = 0)
+            bool is_lower = rule.kind == rule_kind::zero || cln::plusp(c);
+            bool is_upper = rule.kind == rule_kind::zero || cln::minusp(c);
+            if (is_lower && (!r.low || root > *r.low)) r.low = root;
+            if (is_upper && (!r.high || root < *r.high)) r.high = root;
+        }
+        return r;
+    }
+
+    exact::number enumerate(const summand& s, std::vector<int>& open) {
+        for (const selection_rule& rule : s.rules)
+            if (evaluable(rule.form) && !rule_holds(rule)) return exact::number();
+        if (open.empty()) {
+            if (++evaluations_ > limits_.max_sum_terms)
+                throw evaluation_error("the sums need more than " + std::to_string(limits_.max_sum_terms) +
+                                       " terms at this point");
+            return run(*s.body);
+        }
+        // Enumerate next the index with the narrowest finite range.
+        std::size_t best = open.size();
+        cln::cl_RA best_width;
+        range best_range;
+        for (std::size_t k = 0; k < open.size(); ++k) {
+            range r = bounds(s, open[k]);
+            if (!r.low || !r.high) continue;
+            cln::cl_RA width = *r.high - *r.low;
+            if (best == open.size() || width < best_width) {
+                best = k;
+                best_width = width;
+                best_range = r;
+            }
+        }
+        if (best == open.size()) {
+            std::string names;
+            for (int k : open) names += (names.empty() ? "'" : ", '") + p_.slot_names[k] + "'";
+            throw evaluation_error("nothing bounds the summation index " + names +
+                                   ": an index must fill a slot of a coupling symbol, a delta or a tri() "
+                                   "that multiplies the whole summand");
+        }
+        int slot = open[best];
+        open.erase(open.begin() + static_cast<long>(best));
+        exact::number total;
+        // Values in steps of 1/2 from the lower bound rounded up.
+        cln::cl_I first = cln::ceiling1(2 * *best_range.low);
+        cln::cl_I last = cln::floor1(2 * *best_range.high);
+        for (cln::cl_I t = first; t <= last; t = t + 1) {
+            int parity = p_.declared_parity[slot];
+            if ((parity == 1 && cln::oddp(t)) || (parity == 2 && cln::evenp(t))) continue;
+            assign(slot, cln::cl_RA(t) / 2);
+            total += enumerate(s, open);
+        }
+        known_[slot] = false;
+        open.insert(open.begin() + static_cast<long>(best), slot);
+        return total;
+    }
+
+    const eval_detail::program& p_;
+    const evaluation_limits& limits_;
+    std::vector<cln::cl_RA> value_;
+    std::vector<bool> known_;
+    long evaluations_ = 0;
+};
+
+}  // namespace
+
+compiled_expression::compiled_expression(const GiNaC::ex& e, const quantum_numbers& numbers,
+                                         evaluation_limits limits)
+    : program_(std::make_unique<eval_detail::program>(eval_detail::compile(e, numbers))), limits_(limits) {}
+compiled_expression::~compiled_expression() = default;
+compiled_expression::compiled_expression(compiled_expression&&) noexcept = default;
+compiled_expression& compiled_expression::operator=(compiled_expression&&) noexcept = default;
+
+exact::number compiled_expression::at(const assignment& values) const {
+    machine m(*program_, limits_);
+    std::vector<std::string> missing;
+    for (int slot : program_->free_slots) {
+        const std::string& name = program_->slot_names[slot];
+        auto it = std::find_if(values.begin(), values.end(),
+                               [&](const auto& kv) { return kv.first.get_name() == name; });
+        if (it == values.end()) {
+            missing.push_back(name);
+            continue;
+        }
+        m.assign(slot, cln::the<cln::cl_RA>(it->second.to_cl_N()));
+    }
+    if (!missing.empty()) {
+        std::string list;
+        for (const auto& n : missing) list += (list.empty() ? "" : ", ") + n;
+        throw evaluation_error("no value given for " + list + " (write: eval EXPR at " + missing.front() +
+                               "=...)");
+    }
+    return m.run(*program_->root);
+}
+
+std::string describe(const assignment& at) {
+    std::string out;
+    for (const auto& [s, v] : at) {
+        std::ostringstream os;
+        os << s.get_name() << "=" << v;
+        out += (out.empty() ? "" : ", ") + os.str();
+    }
+    return out;
+}
+
+GiNaC::ex to_ex(const exact::number& value) {
+    GiNaC::ex out = 0;
+    for (const auto& [radicand, coefficient] : value.terms()) {
+        GiNaC::numeric q{cln::cl_N(coefficient)};
+        GiNaC::numeric r{cln::cl_N(radicand)};
+        out += r == 1 ? GiNaC::ex(q) : q * GiNaC::sqrt(r);
+    }
+    return out;
+}
+
+}  // namespace couplet

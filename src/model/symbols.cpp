@@ -1,0 +1,191 @@
+#include "couplet/model/symbols.hpp"
+
+#include <algorithm>
+#include <cln/rational.h>
+
+namespace couplet {
+
+using namespace GiNaC;
+
+namespace {
+
+bool is_num(const ex& e) { return is_a<numeric>(e); }
+numeric num(const ex& e) { return ex_to<numeric>(e); }
+
+// Known-false numeric selection rules make the symbol 0; anything symbolic is kept.
+bool numeric_triangle_fails(const ex& a, const ex& b, const ex& c) {
+    if (!is_num(a) || !is_num(b) || !is_num(c)) return false;
+    numeric x = num(a), y = num(b), z = num(c);
+    if (!(x + y + z).is_integer()) return true;
+    for (const numeric& v : {x, y, z})
+        if (v.is_negative() || !(2 * v).is_integer()) return true;
+    return z < abs(x - y) || z > x + y;
+}
+
+bool numeric_projection_fails(const ex& j, const ex& m) {
+    if (!is_num(j) || !is_num(m)) return false;
+    numeric jj = num(j), mm = num(m);
+    return !(jj - mm).is_integer() || abs(mm) > jj;
+}
+
+ex wigner3j_eval(const ex& j1, const ex& j2, const ex& j3, const ex& m1, const ex& m2, const ex& m3) {
+    ex msum = (m1 + m2 + m3).expand();
+    if ((is_num(msum) && !msum.is_zero()) || numeric_triangle_fails(j1, j2, j3) ||
+        numeric_projection_fails(j1, m1) || numeric_projection_fails(j2, m2) ||
+        numeric_projection_fails(j3, m3))
+        return 0;
+    return wigner3j(j1, j2, j3, m1, m2, m3).hold();
+}
+
+ex clebsch_eval(const ex& j1, const ex& m1, const ex& j2, const ex& m2, const ex& j, const ex& m) {
+    ex msum = (m1 + m2 - m).expand();
+    if ((is_num(msum) && !msum.is_zero()) || numeric_triangle_fails(j1, j2, j) ||
+        numeric_projection_fails(j1, m1) || numeric_projection_fails(j2, m2) ||
+        numeric_projection_fails(j, m))
+        return 0;
+    return clebsch(j1, m1, j2, m2, j, m).hold();
+}
+
+ex wigner6j_eval(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e, const ex& f) {
+    // Triads of {a b c; d e f}: (a b c), (a e f), (d b f), (d e c).
+    if (numeric_triangle_fails(a, b, c) || numeric_triangle_fails(a, e, f) ||
+        numeric_triangle_fails(d, b, f) || numeric_triangle_fails(d, e, c))
+        return 0;
+    return wigner6j(a, b, c, d, e, f).hold();
+}
+
+ex wigner9j_eval(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e, const ex& f,
+                 const ex& g, const ex& h, const ex& i) {
+    // Triads: the three rows and the three columns.
+    if (numeric_triangle_fails(a, b, c) || numeric_triangle_fails(d, e, f) ||
+        numeric_triangle_fails(g, h, i) || numeric_triangle_fails(a, d, g) ||
+        numeric_triangle_fails(b, e, h) || numeric_triangle_fails(c, f, i))
+        return 0;
+    return wigner9j(a, b, c, d, e, f, g, h, i).hold();
+}
+
+ex kdelta_eval(const ex& x, const ex& y) {
+    ex diff = (x - y).expand();
+    if (diff.is_zero()) return 1;
+    if (is_num(diff)) return 0;
+    return kdelta(x, y).hold();
+}
+
+ex triangle_eval(const ex& a, const ex& b, const ex& c) {
+    if (is_num(a) && is_num(b) && is_num(c)) return numeric_triangle_fails(a, b, c) ? 0 : 1;
+    return triangle(a, b, c).hold();
+}
+
+}  // namespace
+
+REGISTER_FUNCTION(wigner3j, eval_func(wigner3j_eval))
+REGISTER_FUNCTION(wigner6j, eval_func(wigner6j_eval))
+REGISTER_FUNCTION(wigner9j, eval_func(wigner9j_eval))
+REGISTER_FUNCTION(clebsch, eval_func(clebsch_eval))
+REGISTER_FUNCTION(kdelta, eval_func(kdelta_eval))
+REGISTER_FUNCTION(triangle, eval_func(triangle_eval))
+
+symbol_kind kind_of(const ex& e) {
+    if (!is_a<function>(e)) return symbol_kind::none;
+    unsigned s = ex_to<function>(e).get_serial();
+    if (s == wigner3j_SERIAL::serial) return symbol_kind::threej;
+    if (s == wigner6j_SERIAL::serial) return symbol_kind::sixj;
+    if (s == wigner9j_SERIAL::serial) return symbol_kind::ninej;
+    if (s == clebsch_SERIAL::serial) return symbol_kind::clebsch_gordan;
+    if (s == kdelta_SERIAL::serial) return symbol_kind::delta;
+    if (s == triangle_SERIAL::serial) return symbol_kind::triangle;
+    return symbol_kind::none;
+}
+
+// ---- phase ---------------------------------------------------------------------------------
+
+GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(phase, basic, print_func<print_context>(&phase::do_print))
+
+phase::phase() {}
+phase::phase(const ex& exponent) : x_(exponent) {}
+
+int phase::compare_same_type(const basic& other) const {
+    return x_.compare(static_cast<const phase&>(other).x_);
+}
+
+ex& phase::let_op(size_t) {
+    ensure_if_modifiable();
+    return x_;
+}
+
+ex phase::eval() const {
+    ex x = x_.expand();
+    if (is_num(x)) {
+        numeric n = num(x);
+        if (n.is_integer()) return n.is_even() ? 1 : -1;
+        return this->hold();  // (-1)^(1/2) is not a phase of this domain; evaluation reports it
+    }
+    // Reduce the constant term into [0, 2): (-1)^(j+3) == (-1)^(j+1).
+    if (is_a<add>(x)) {
+        ex constant = 0, rest = 0;
+        for (const ex& t : x) (is_num(t) ? constant : rest) += t;
+        numeric c = num(constant);
+        numeric reduced = c - 2 * numeric(cln::floor1(cln::the<cln::cl_RA>((c / 2).to_cl_N())));
+        if (reduced != c) return dynallocate<phase>(rest + reduced);
+    }
+    return this->hold();
+}
+
+void phase::do_print(const print_context& c, unsigned) const {
+    c.s << "(-1)^(";
+    x_.print(c);
+    c.s << ")";
+}
+
+ex make_phase(const ex& exponent) { return phase(exponent).eval(); }
+
+// ---- index_sum -----------------------------------------------------------------------------
+
+GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(index_sum, basic,
+                                     print_func<print_context>(&index_sum::do_print))
+
+index_sum::index_sum() {}
+index_sum::index_sum(const ex& body, const lst& indices) : body_(body), indices_(indices) {}
+
+int index_sum::compare_same_type(const basic& other) const {
+    const auto& o = static_cast<const index_sum&>(other);
+    int c = indices_.compare(o.indices_);
+    return c != 0 ? c : body_.compare(o.body_);
+}
+
+ex& index_sum::let_op(size_t) {
+    ensure_if_modifiable();
+    return body_;
+}
+
+ex index_sum::subs(const exmap& m, unsigned options) const {
+    exmap free_part;
+    for (const auto& [from, to] : m) {
+        bool bound = std::any_of(indices_.begin(), indices_.end(),
+                                 [&](const ex& i) { return from.is_equal(i); });
+        if (!bound) free_part.emplace(from, to);
+    }
+    ex b = body_.subs(free_part, options);
+    if (b.is_equal(body_)) return *this;
+    return make_sum(b, indices_);
+}
+
+ex index_sum::eval() const {
+    if (body_.is_zero()) return 0;
+    return this->hold();
+}
+
+void index_sum::do_print(const print_context& c, unsigned) const {
+    c.s << "sum(";
+    for (size_t i = 0; i < indices_.nops(); ++i) {
+        if (i) c.s << ", ";
+        indices_.op(i).print(c);
+    }
+    c.s << " : ";
+    body_.print(c);
+    c.s << ")";
+}
+
+ex make_sum(const ex& body, const lst& indices) { return index_sum(body, indices).eval(); }
+
+}  // namespace couplet

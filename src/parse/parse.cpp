@@ -1,0 +1,62 @@
+#include <boost/spirit/home/x3.hpp>
+#include <string>
+
+#include "couplet/parse.hpp"
+#include "parse/grammar.hpp"
+
+namespace couplet {
+namespace {
+
+namespace x3 = boost::spirit::x3;
+using parser::iterator_type;
+
+// What stands at `at`, for "found ..." in messages: one UTF-8 character, or the end.
+std::string describe_found(const std::string& text, std::size_t at, std::size_t end) {
+    if (at >= end) return "the end of the statement";
+    std::size_t n = 1;
+    while (at + n < end && (static_cast<unsigned char>(text[at + n]) & 0xC0) == 0x80) ++n;
+    return "'" + text.substr(at, n) + "'";
+}
+
+std::size_t skip_blanks(const std::string& text, std::size_t at, std::size_t end) {
+    iterator_type first = text.begin() + at, last = text.begin() + end;
+    x3::skip_over(first, last, x3::make_context<x3::skipper_tag>(parser::skipper));
+    return static_cast<std::size_t>(first - text.begin());
+}
+
+std::string expected_phrase(std::string which) {
+    if (which.size() >= 2 && which.front() == '"' && which.back() == '"')
+        which = "'" + which.substr(1, which.size() - 2) + "'";
+    if (which == "end of statement") return "an operator or the end of the statement";
+    return which;
+}
+
+ast::statement parse_one(const source_file& src, statement_span span) {
+    const std::string& text = src.text();
+    const iterator_type begin = text.begin();
+    iterator_type first = begin + span.begin, last = begin + span.end;
+    ast::statement tree;
+    try {
+        auto const grammar = x3::with<parser::source_begin_tag>(begin)[parser::statement()];
+        if (!x3::phrase_parse(first, last, grammar, parser::skipper, tree)) {
+            std::size_t at = skip_blanks(text, span.begin, span.end);
+            throw user_error(at, "unexpected " + describe_found(text, at, span.end) +
+                                     "; expected a statement or an expression");
+        }
+    } catch (const x3::expectation_failure<iterator_type>& e) {
+        std::size_t at = skip_blanks(text, static_cast<std::size_t>(e.where() - begin), span.end);
+        throw user_error(at, "expected " + expected_phrase(e.which()) + ", found " +
+                                 describe_found(text, at, span.end));
+    }
+    return tree;
+}
+
+}  // namespace
+
+std::vector<parsed_statement> parse_program(const source_file& src) {
+    std::vector<parsed_statement> out;
+    for (const statement_span& span : split_statements(src)) out.push_back({parse_one(src, span), span});
+    return out;
+}
+
+}  // namespace couplet

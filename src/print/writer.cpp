@@ -1,0 +1,179 @@
+#include "print/writer.hpp"
+
+#include <algorithm>
+#include <sstream>
+
+#include "couplet/model/symbols.hpp"
+#include "couplet/print/print.hpp"
+
+namespace couplet::print_detail {
+
+using namespace GiNaC;
+
+namespace {
+
+// Reading order of factors in a product: phase, plain factors and radicals, deltas, then the
+// coupling symbols by size, sums last (a sum's body runs to the end of the product).
+int factor_rank(const ex& f) {
+    if (is_a<couplet::phase>(f)) return 0;
+    if (is_a<index_sum>(f)) return 8;
+    switch (kind_of(f)) {
+        case symbol_kind::delta:
+        case symbol_kind::triangle: return 2;
+        case symbol_kind::clebsch_gordan: return 3;
+        case symbol_kind::threej: return 4;
+        case symbol_kind::sixj: return 5;
+        case symbol_kind::ninej: return 6;
+        default: return 1;
+    }
+}
+
+void sort_factors(std::vector<ex>& fs) {
+    std::vector<std::pair<std::pair<int, std::string>, ex>> keyed;
+    for (const ex& f : fs) keyed.push_back({{factor_rank(f), to_text(f)}, f});
+    std::stable_sort(keyed.begin(), keyed.end(),
+                     [](const auto& a, const auto& b) { return a.first < b.first; });
+    fs.clear();
+    for (auto& k : keyed) fs.push_back(k.second);
+}
+
+ex without_coefficient(const ex& term) {
+    if (is_a<numeric>(term)) return 1;
+    if (!is_a<mul>(term)) return term;
+    ex rest = 1;
+    for (const ex& f : term)
+        if (!is_a<numeric>(f)) rest *= f;
+    return rest;
+}
+
+}  // namespace
+
+product_parts split_product(const ex& e) {
+    product_parts p;
+    numeric coefficient = 1;
+    auto take = [&](const ex& f) {
+        if (is_a<numeric>(f)) {
+            coefficient *= ex_to<numeric>(f);
+        } else if (is_a<GiNaC::power>(f) && is_a<numeric>(f.op(1)) &&
+                   ex_to<numeric>(f.op(1)).is_negative()) {
+            p.bottom.push_back(pow(f.op(0), -f.op(1)));
+        } else {
+            p.top.push_back(f);
+        }
+    };
+    if (is_a<mul>(e)) {
+        for (const ex& f : e) take(f);
+    } else {
+        take(e);
+    }
+    p.negative = coefficient.is_negative();
+    coefficient = abs(coefficient);
+    p.numerator = coefficient.numer();
+    p.denominator = coefficient.denom();
+    sort_factors(p.top);
+    sort_factors(p.bottom);
+    return p;
+}
+
+std::vector<ex> ordered_terms(const ex& s) {
+    std::vector<std::pair<std::pair<int, std::pair<std::string, std::string>>, ex>> keyed;
+    for (const ex& t : s) {
+        int constant = is_a<numeric>(t) ? 1 : 0;
+        keyed.push_back({{constant, {to_text(without_coefficient(t)), to_text(t)}}, t});
+    }
+    std::stable_sort(keyed.begin(), keyed.end(),
+                     [](const auto& a, const auto& b) { return a.first < b.first; });
+    std::vector<ex> out;
+    for (auto& k : keyed) out.push_back(k.second);
+    return out;
+}
+
+bool prints_compactly(const ex& s) {
+    for (const ex& t : s) {
+        ex rest = without_coefficient(t);
+        if (!is_a<numeric>(rest) && !is_a<symbol>(rest)) return false;
+    }
+    return true;
+}
+
+printed writer::write(const ex& e) {
+    if (is_a<numeric>(e)) return number(ex_to<numeric>(e));
+    if (is_a<symbol>(e)) return name(ex_to<symbol>(e).get_name());
+    if (is_a<add>(e)) return sum(e);
+    if (is_a<mul>(e)) return product(e);
+    if (is_a<GiNaC::power>(e) && is_a<numeric>(e.op(1))) {
+        numeric n = ex_to<numeric>(e.op(1));
+        if (n.is_negative()) return product(e);
+        if (n == numeric(1, 2)) return root(e.op(0));
+        return power(e.op(0), n);
+    }
+    if (is_a<couplet::phase>(e)) return phase(e.op(0));
+    if (is_a<index_sum>(e)) return sum_over(e);
+    if (kind_of(e) != symbol_kind::none) return function(e);
+    std::ostringstream os;  // not produced by couplet's own lowering; shown as GiNaC has it
+    os << e;
+    return {os.str(), level::atom};
+}
+
+std::string writer::at_least(const ex& e, level needed) {
+    printed p = write(e);
+    return p.binding >= needed ? p.text : parenthesize(p.text);
+}
+
+printed writer::sum(const ex& e) {
+    const bool compact = prints_compactly(e);
+    std::string out;
+    bool first = true;
+    for (const ex& t : ordered_terms(e)) {
+        bool negative = split_product(t).negative;
+        std::string body = at_least(negative ? ex(-t) : t, level::product);
+        if (first) {
+            out = negative ? "-" + body : body;
+        } else {
+            const char* sign = negative ? "-" : "+";
+            out += compact ? std::string(sign) : std::string(" ") + sign + " ";
+            out += body;
+        }
+        first = false;
+    }
+    return {out, level::sum};
+}
+
+std::string writer::join_factors(const std::vector<ex>& factors, const numeric& coefficient) {
+    std::string out;
+    auto append = [&](const std::string& s) {
+        if (!out.empty()) out += times();
+        out += s;
+    };
+    if (coefficient != 1) append(number(coefficient).text);
+    for (const ex& f : factors) append(at_least(f, level::product));
+    return out;
+}
+
+printed writer::product(const ex& e) {
+    product_parts p = split_product(e);
+    printed result;
+    if (p.bottom.empty() && p.denominator == 1) {
+        if (p.top.size() == 1 && p.numerator == 1) {
+            result = write(p.top.front());
+        } else {
+            result = {join_factors(p.top, p.numerator), level::product};
+            if (result.text.empty()) result = number(p.numerator);
+        }
+    } else {
+        std::string top = join_factors(p.top, p.numerator);
+        if (top.empty()) top = "1";
+        printed bottom;
+        if (p.bottom.size() == 1 && p.denominator == 1)
+            bottom = write(p.bottom.front());
+        else
+            bottom = {join_factors(p.bottom, p.denominator), level::product};
+        result = fraction(top, bottom, bottom.binding);
+    }
+    if (p.negative) result = {"-" + (result.binding >= level::product ? result.text
+                                                                       : parenthesize(result.text)),
+                              level::sum};
+    return result;
+}
+
+}  // namespace couplet::print_detail

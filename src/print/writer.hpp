@@ -1,0 +1,57 @@
+// The structure shared by the text and LaTeX printers: how sums, products, fractions and signs
+// are laid out and in which order.  Notation for each leaf lives in the two derived writers.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <string>
+#include <vector>
+
+namespace couplet::print_detail {
+
+// Binding strength of what was printed, to decide on parentheses.
+enum class level { sum = 1, product = 2, power = 3, atom = 4 };
+
+struct printed {
+    std::string text;
+    level binding;
+};
+
+// A product split for printing: sign, numerator and denominator factors, each sorted.
+struct product_parts {
+    bool negative = false;
+    GiNaC::numeric numerator = 1, denominator = 1;
+    std::vector<GiNaC::ex> top, bottom;  // bottom holds the positive powers of the denominator
+};
+
+product_parts split_product(const GiNaC::ex& e);
+// Terms of a sum in couplet's fixed order (by their printed non-numeric part, constants last).
+std::vector<GiNaC::ex> ordered_terms(const GiNaC::ex& sum);
+// True for c0 + sum c_i x_i: printed compactly (j1+1/2) rather than spaced.
+bool prints_compactly(const GiNaC::ex& sum);
+
+class writer {
+public:
+    virtual ~writer() = default;
+    printed write(const GiNaC::ex& e);
+    std::string at_least(const GiNaC::ex& e, level needed);
+
+protected:
+    virtual printed number(const GiNaC::numeric& n) = 0;
+    virtual printed name(const std::string& n) = 0;
+    virtual printed fraction(const std::string& top, const printed& bottom, level bottom_level) = 0;
+    virtual std::string times() = 0;
+    virtual std::string parenthesize(const std::string& s) = 0;
+    virtual printed power(const GiNaC::ex& base, const GiNaC::numeric& exponent) = 0;
+    virtual printed root(const GiNaC::ex& radicand) = 0;
+    virtual printed phase(const GiNaC::ex& exponent) = 0;
+    virtual printed function(const GiNaC::ex& f) = 0;
+    virtual printed sum_over(const GiNaC::ex& s) = 0;
+
+private:
+    printed sum(const GiNaC::ex& e);
+    printed product(const GiNaC::ex& e);
+    std::string join_factors(const std::vector<GiNaC::ex>& factors, const GiNaC::numeric& coefficient);
+};
+
+}  // namespace couplet::print_detail
