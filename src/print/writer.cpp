@@ -75,12 +75,23 @@ product_parts split_product(const ex& e) {
     return p;
 }
 
+// The heaviest factor of a term decides its place: plain terms first, then terms with
+// coupling symbols by size, then sums; constants last.
+int term_rank(const ex& t) {
+    if (is_a<numeric>(t)) return 100;
+    int rank = 0;
+    if (is_a<mul>(t)) {
+        for (const ex& f : t)
+            if (!is_a<numeric>(f)) rank = std::max(rank, factor_rank(f));
+    } else {
+        rank = factor_rank(t);
+    }
+    return rank;
+}
+
 std::vector<ex> ordered_terms(const ex& s) {
     std::vector<std::pair<std::pair<int, std::pair<std::string, std::string>>, ex>> keyed;
-    for (const ex& t : s) {
-        int constant = is_a<numeric>(t) ? 1 : 0;
-        keyed.push_back({{constant, {to_text(without_coefficient(t)), to_text(t)}}, t});
-    }
+    for (const ex& t : s) keyed.push_back({{term_rank(t), {to_text(without_coefficient(t)), to_text(t)}}, t});
     std::stable_sort(keyed.begin(), keyed.end(),
                      [](const auto& a, const auto& b) { return a.first < b.first; });
     std::vector<ex> out;
