@@ -4,6 +4,7 @@
 #include "couplet/exact/number.hpp"
 #include "couplet/model/normalize.hpp"
 #include "couplet/print/print.hpp"
+#include "couplet/simplify.hpp"
 
 namespace couplet::cli {
 
@@ -18,8 +19,8 @@ assignment values_of(const lowered_statement& s) {
     return at;
 }
 
-outcome simplify(const lowered_statement& s) {
-    ex result = normalize(s.value);
+outcome simplify(const lowered_statement& s, const lowered_program& program) {
+    ex result = simplify_expression(s.value, program.numbers);
     return {json{{"kind", "simplify"}, {"input", s.text}, {"result", to_text(result)},
                  {"latex", to_latex(result)}, {"input_latex", to_latex(s.value)}}};
 }
@@ -72,7 +73,7 @@ outcome execute(const lowered_statement& s, const lowered_program& program, bare
     switch (s.kind) {
         case request_kind::simplify:
             if (s.bare && bare == bare_meaning::eval) return evaluate(s, program);
-            return simplify(s);
+            return simplify(s, program);
         case request_kind::eval: return evaluate(s, program);
         case request_kind::check: return check(s, program);
         default: return {json()};
