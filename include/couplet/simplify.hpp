@@ -5,9 +5,18 @@
 
 #include <ginac/ginac.h>
 
+#include <stdexcept>
+
 #include "couplet/model/quantum.hpp"
 
 namespace couplet {
+
+// A request couplet refuses for a reason the user can fix (a phase exponent that is not an
+// integer everywhere, ...).  The CLI reports it like a user error, at the statement, exit 2.
+class refusal : public std::runtime_error {
+public:
+    using std::runtime_error::runtime_error;
+};
 
 GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers);
 

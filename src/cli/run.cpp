@@ -8,6 +8,7 @@
 #include "cli/execute.hpp"
 #include "cli/report.hpp"
 #include "couplet/model/lower.hpp"
+#include "couplet/simplify.hpp"
 
 namespace couplet::cli {
 namespace {
@@ -124,7 +125,12 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         bare_meaning bare = r.command == "eval" ? bare_meaning::eval : bare_meaning::simplify;
         rep.begin();
         for (const lowered_statement& s : program.statements) {
-            outcome o = execute(s, program, bare);
+            outcome o;
+            try {
+                o = execute(s, program, bare);
+            } catch (const refusal& e) {
+                throw user_error(s.span.begin, e.what());
+            }
             if (!o.record.is_null()) rep.statement(o.record);
             any_failed = any_failed || o.check_failed;
         }

@@ -34,7 +34,7 @@ public:
             for (const ex& c : e) n->children.push_back(build(c));
         } else if (is_a<GiNaC::power>(e)) {
             build_power(*n, e);
-        } else if (is_a<phase>(e)) {
+        } else if (is_a<phase_factor>(e)) {
             n->kind = node_kind::phase;
             n->forms.push_back(form(e.op(0)));
         } else if (is_a<index_sum>(e)) {

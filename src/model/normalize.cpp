@@ -10,11 +10,11 @@ namespace {
 
 // (-1)^x as an exponent x, for a factor that is a phase or a power of one.
 bool phase_exponent(const ex& f, ex& exponent) {
-    if (is_a<phase>(f)) {
+    if (is_a<phase_factor>(f)) {
         exponent = f.op(0);
         return true;
     }
-    if (is_a<power>(f) && is_a<phase>(f.op(0)) && is_a<numeric>(f.op(1)) &&
+    if (is_a<power>(f) && is_a<phase_factor>(f.op(0)) && is_a<numeric>(f.op(1)) &&
         ex_to<numeric>(f.op(1)).is_integer()) {
         exponent = f.op(0).op(0) * f.op(1);
         return true;

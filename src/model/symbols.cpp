@@ -99,45 +99,47 @@ symbol_kind kind_of(const ex& e) {
 
 // ---- phase ---------------------------------------------------------------------------------
 
-GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(phase, basic, print_func<print_context>(&phase::do_print))
+GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(phase_factor, basic,
+                                     print_func<print_context>(&phase_factor::do_print))
 
-phase::phase() {}
-phase::phase(const ex& exponent) : x_(exponent) {}
+phase_factor::phase_factor() {}
+phase_factor::phase_factor(const ex& exponent) : x_(exponent) {}
 
-int phase::compare_same_type(const basic& other) const {
-    return x_.compare(static_cast<const phase&>(other).x_);
+int phase_factor::compare_same_type(const basic& other) const {
+    return x_.compare(static_cast<const phase_factor&>(other).x_);
 }
 
-ex& phase::let_op(size_t) {
+ex& phase_factor::let_op(size_t) {
     ensure_if_modifiable();
     return x_;
 }
 
-ex phase::eval() const {
+ex phase_factor::eval() const {
     ex x = x_.expand();
     if (is_num(x)) {
         numeric n = num(x);
         if (n.is_integer()) return n.is_even() ? 1 : -1;
         return this->hold();  // (-1)^(1/2) is not a phase of this domain; evaluation reports it
     }
-    // Reduce the constant term into [0, 2): (-1)^(j+3) == (-1)^(j+1).
+    // Reduce the constant term into (-1, 1]: (-1)^(j+3) == (-1)^(j+1), (-1)^(s+3/2) == (-1)^(s-1/2).
     if (is_a<add>(x)) {
         ex constant = 0, rest = 0;
         for (const ex& t : x) (is_num(t) ? constant : rest) += t;
         numeric c = num(constant);
-        numeric reduced = c - 2 * numeric(cln::floor1(cln::the<cln::cl_RA>((c / 2).to_cl_N())));
-        if (reduced != c) return dynallocate<phase>(rest + reduced);
+        // c - 2*ceil((c-1)/2) lies in (-1, 1].
+        numeric reduced = c - 2 * numeric(cln::ceiling1(cln::the<cln::cl_RA>(((c - 1) / 2).to_cl_N())));
+        if (reduced != c) return dynallocate<phase_factor>(rest + reduced);
     }
     return this->hold();
 }
 
-void phase::do_print(const print_context& c, unsigned) const {
+void phase_factor::do_print(const print_context& c, unsigned) const {
     c.s << "(-1)^(";
     x_.print(c);
     c.s << ")";
 }
 
-ex make_phase(const ex& exponent) { return phase(exponent).eval(); }
+ex make_phase(const ex& exponent) { return phase_factor(exponent).eval(); }
 
 // ---- index_sum -----------------------------------------------------------------------------
 

@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <sstream>
+#include <tuple>
 
 #include "couplet/model/symbols.hpp"
 #include "couplet/print/print.hpp"
@@ -15,7 +16,7 @@ namespace {
 // Reading order of factors in a product: phase, plain factors and radicals, deltas, then the
 // coupling symbols by size, sums last (a sum's body runs to the end of the product).
 int factor_rank(const ex& f) {
-    if (is_a<couplet::phase>(f)) return 0;
+    if (is_a<phase_factor>(f)) return 0;
     if (is_a<index_sum>(f)) return 8;
     switch (kind_of(f)) {
         case symbol_kind::delta:
@@ -90,12 +91,25 @@ int term_rank(const ex& t) {
 }
 
 std::vector<ex> ordered_terms(const ex& s) {
-    std::vector<std::pair<std::pair<int, std::pair<std::string, std::string>>, ex>> keyed;
-    for (const ex& t : s) keyed.push_back({{term_rank(t), {to_text(without_coefficient(t)), to_text(t)}}, t});
-    std::stable_sort(keyed.begin(), keyed.end(),
-                     [](const auto& a, const auto& b) { return a.first < b.first; });
+    struct keyed_term {
+        int rank;
+        ex rest;
+        std::string rest_text, text;
+        ex term;
+    };
+    std::vector<keyed_term> keyed;
+    for (const ex& t : s) {
+        ex rest = without_coefficient(t);
+        keyed.push_back({term_rank(t), rest, to_text(rest), to_text(t), t});
+    }
+    std::stable_sort(keyed.begin(), keyed.end(), [](const keyed_term& a, const keyed_term& b) {
+        if (a.rank != b.rank) return a.rank < b.rank;
+        if (is_a<symbol>(a.rest) && is_a<symbol>(b.rest) && a.rest_text != b.rest_text)
+            return readable_name_less(a.rest_text, b.rest_text);
+        return std::tie(a.rest_text, a.text) < std::tie(b.rest_text, b.text);
+    });
     std::vector<ex> out;
-    for (auto& k : keyed) out.push_back(k.second);
+    for (auto& k : keyed) out.push_back(k.term);
     return out;
 }
 
@@ -118,7 +132,7 @@ printed writer::write(const ex& e) {
         if (n == numeric(1, 2)) return root(e.op(0));
         return power(e.op(0), n);
     }
-    if (is_a<couplet::phase>(e)) return phase(e.op(0));
+    if (is_a<phase_factor>(e)) return phase(e.op(0));
     if (is_a<index_sum>(e)) return sum_over(e);
     if (kind_of(e) != symbol_kind::none) return function(e);
     std::ostringstream os;  // not produced by couplet's own lowering; shown as GiNaC has it

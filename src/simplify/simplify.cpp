@@ -1,9 +1,19 @@
 #include "couplet/simplify.hpp"
 
 #include "couplet/model/normalize.hpp"
+#include "couplet/symmetry/symmetries.hpp"
+#include "simplify/phase_reduction.hpp"
 
 namespace couplet {
 
-GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers&) { return normalize(e); }
+// Each stage keeps the value at every admissible assignment; the order matters only in that
+// phases are reduced after the symmetries have produced theirs.
+GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers) {
+    GiNaC::ex x = normalize(e);
+    x = symmetry::canonicalize_symbols(x, numbers);
+    x = merge_phases(x.expand());
+    x = reduce_phases(x, numbers);
+    return merge_phases(x);
+}
 
 }  // namespace couplet

@@ -24,10 +24,10 @@ enum class symbol_kind { threej, sixj, ninej, clebsch_gordan, delta, triangle, n
 symbol_kind kind_of(const GiNaC::ex& e);
 
 // (-1)^x with x kept exact: GiNaC's pow(-1, x) neither merges nor reduces mod 2.
-class phase : public GiNaC::basic {
-    GINAC_DECLARE_REGISTERED_CLASS(phase, GiNaC::basic)
+class phase_factor : public GiNaC::basic {
+    GINAC_DECLARE_REGISTERED_CLASS(phase_factor, GiNaC::basic)
 public:
-    explicit phase(const GiNaC::ex& exponent);
+    explicit phase_factor(const GiNaC::ex& exponent);
     const GiNaC::ex& exponent() const { return x_; }
     size_t nops() const override { return 1; }
     GiNaC::ex op(size_t) const override { return x_; }

@@ -15,4 +15,8 @@ std::string to_latex(const GiNaC::ex& e);
 // digits, primes and a fixed set of commands can appear in the result.
 std::string latex_identifier(const std::string& name);
 
+// The readable order of names: j < j1 < j2 < j12 < J < J' < l < lambda (letters case-blind,
+// lower case first, subscripts by value, primes last).  Printing and canonical forms use it.
+bool readable_name_less(const std::string& a, const std::string& b);
+
 }  // namespace couplet

@@ -1,0 +1,207 @@
+#include "simplify/phase_reduction.hpp"
+
+#include <cln/rational_io.h>
+
+#include <set>
+#include <sstream>
+
+#include "couplet/model/lower.hpp"
+#include "couplet/model/symbols.hpp"
+#include "couplet/phase/context.hpp"
+#include "couplet/print/print.hpp"
+#include <algorithm>
+
+namespace couplet {
+
+using namespace GiNaC;
+
+namespace {
+
+cln::cl_RA rational_of(const ex& n) { return cln::the<cln::cl_RA>(ex_to<numeric>(n).to_cl_N()); }
+
+phase::linear_form to_form(const ex& e) {
+    phase::linear_form f;
+    ex x = e.expand();
+    auto take = [&](const ex& t) {
+        if (is_a<numeric>(t)) {
+            f += phase::linear_form(rational_of(t));
+        } else if (is_a<symbol>(t)) {
+            f += phase::linear_form::variable(ex_to<symbol>(t).get_name());
+        } else {
+            const ex& s = is_a<symbol>(t.op(0)) ? t.op(0) : t.op(1);
+            const ex& c = is_a<symbol>(t.op(0)) ? t.op(1) : t.op(0);
+            f += phase::linear_form::variable(ex_to<symbol>(s).get_name(), rational_of(c));
+        }
+    };
+    if (is_a<add>(x))
+        for (const ex& t : x) take(t);
+    else
+        take(x);
+    return f;
+}
+
+ex to_ex(const phase::linear_form& f, const quantum_numbers& numbers) {
+    ex out = numeric(cln::cl_N(f.constant()));
+    for (const auto& [name, c] : f.coefficients()) {
+        const quantum_number* q = numbers.find(name);
+        out += numeric(cln::cl_N(c)) * (q ? ex(q->symbol) : ex(symbol(name)));
+    }
+    return out;
+}
+
+// What a product's factors imply: triads, j - m integral, m-sums, declared parities.
+struct constraints {
+    struct triad {
+        ex a, b, c;
+    };
+    std::vector<triad> triads;
+    std::vector<ex> integers;
+    std::vector<std::array<ex, 3>> zero_sums;
+    std::vector<ex> zeros;
+
+    void add_factor(const ex& f) {
+        if (is_a<mul>(f)) {
+            for (const ex& g : f) add_factor(g);
+            return;
+        }
+        if (is_a<power>(f) && is_a<numeric>(f.op(1)) && ex_to<numeric>(f.op(1)).is_pos_integer()) {
+            add_factor(f.op(0));
+            return;
+        }
+        if (is_a<index_sum>(f)) {
+            const ex& body = ex_to<index_sum>(f).body();
+            if (!is_a<add>(body)) add_factor(body);
+            return;
+        }
+        switch (kind_of(f)) {
+            case symbol_kind::threej:
+                triads.push_back({f.op(0), f.op(1), f.op(2)});
+                for (int k = 0; k < 3; ++k) integers.push_back(f.op(k) - f.op(3 + k));
+                zero_sums.push_back({f.op(3), f.op(4), f.op(5)});
+                break;
+            case symbol_kind::clebsch_gordan:
+                triads.push_back({f.op(0), f.op(2), f.op(4)});
+                for (int k = 0; k < 3; ++k) integers.push_back(f.op(2 * k) - f.op(2 * k + 1));
+                zero_sums.push_back({f.op(1), f.op(3), -f.op(5)});
+                break;
+            case symbol_kind::sixj:
+                triads.push_back({f.op(0), f.op(1), f.op(2)});
+                triads.push_back({f.op(0), f.op(4), f.op(5)});
+                triads.push_back({f.op(3), f.op(1), f.op(5)});
+                triads.push_back({f.op(3), f.op(4), f.op(2)});
+                break;
+            case symbol_kind::ninej:
+                for (int r = 0; r < 3; ++r) triads.push_back({f.op(3 * r), f.op(3 * r + 1), f.op(3 * r + 2)});
+                for (int c = 0; c < 3; ++c) triads.push_back({f.op(c), f.op(3 + c), f.op(6 + c)});
+                break;
+            case symbol_kind::triangle: triads.push_back({f.op(0), f.op(1), f.op(2)}); break;
+            case symbol_kind::delta: zeros.push_back(f.op(0) - f.op(1)); break;
+            default: break;
+        }
+    }
+};
+
+std::set<std::string> names_in(const ex& e) {
+    std::set<std::string> out;
+    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it)
+        if (is_a<symbol>(*it)) out.insert(ex_to<symbol>(*it).get_name());
+    return out;
+}
+
+std::string show(const phase::assignment& a) {
+    std::ostringstream os;
+    bool first = true;
+    for (const auto& [name, v] : a) {
+        os << (first ? "" : ", ") << name << "=" << v;
+        first = false;
+    }
+    return os.str();
+}
+
+class reducer {
+public:
+    explicit reducer(const quantum_numbers& numbers) : numbers_(numbers) {}
+
+    ex term(const ex& e, const constraints& inherited) {
+        if (is_a<add>(e)) {
+            ex out = 0;
+            for (const ex& t : e) out += term(t, inherited);
+            return out;
+        }
+        constraints here = inherited;
+        here.add_factor(e);
+        phase::context ctx = context_for(e, here);
+        auto factor = [&](const ex& f) -> ex {
+            if (is_a<phase_factor>(f)) return reduce(f.op(0), ctx);
+            if (is_a<index_sum>(f)) {
+                const auto& s = ex_to<index_sum>(f);
+                return make_sum(term(s.body(), here), s.indices());
+            }
+            return f;
+        };
+        if (is_a<mul>(e)) {
+            ex out = 1;
+            for (const ex& f : e) out *= factor(f);
+            return out;
+        }
+        return factor(e);
+    }
+
+private:
+    phase::context context_for(const ex& e, const constraints& c) {
+        phase::context ctx;
+        std::set<std::string> present = names_in(e);
+        for (const auto& t : c.triads)
+            for (const ex& x : {t.a, t.b, t.c})
+                for (const auto& n : names_in(x)) present.insert(n);
+        // The readable order of the symmetries: angular momenta, then projections, by name.
+        std::vector<const quantum_number*> ordered;
+        for (const quantum_number& q : numbers_.all())
+            if (present.count(q.name)) ordered.push_back(&q);
+        std::sort(ordered.begin(), ordered.end(), [](const quantum_number* a, const quantum_number* b) {
+            bool pa = a->role == qn_role::projection, pb = b->role == qn_role::projection;
+            return pa != pb ? pb : readable_name_less(a->name, b->name);
+        });
+        for (const quantum_number* qp : ordered) {
+            const quantum_number& q = *qp;
+            phase::parity p = q.parity == qn_parity::integer    ? phase::parity::integer
+                              : q.parity == qn_parity::half_odd ? phase::parity::half_odd
+                                                                 : phase::parity::unknown;
+            if (q.role == qn_role::projection) {
+                ctx.declare_angular(q.name, phase::parity::unknown);
+                if (q.parity == qn_parity::integer) ctx.add_integer(phase::linear_form::variable(q.name));
+                if (q.parity == qn_parity::half_odd)
+                    ctx.add_integer(phase::linear_form::variable(q.name) + phase::linear_form(cln::cl_RA(1) / 2));
+            } else {
+                ctx.declare_angular(q.name, p);
+            }
+        }
+        for (const auto& t : c.triads) ctx.add_triad(to_form(t.a), to_form(t.b), to_form(t.c));
+        for (const ex& i : c.integers) ctx.add_integer(to_form(i));
+        for (const auto& z : c.zero_sums) ctx.add_zero_sum(to_form(z[0]), to_form(z[1]), to_form(z[2]));
+        for (const ex& z : c.zeros) ctx.add_zero(to_form(z));
+        return ctx;
+    }
+
+    ex reduce(const ex& exponent, const phase::context& ctx) {
+        phase::linear_form x = to_form(exponent);
+        phase::integrality i = ctx.check_integer(x);
+        if (!i.integer)
+            throw phase_not_integer("the exponent of (-1)^(" + to_text(exponent) +
+                                    ") is not an integer for every admissible value" +
+                                    (i.witness ? " (for example at " + show(*i.witness) + ")" : std::string()) +
+                                    "; declare the parities with 'int' or 'half', or fix the phase");
+        return make_phase(to_ex(ctx.canonical(x), numbers_));
+    }
+
+    const quantum_numbers& numbers_;
+};
+
+}  // namespace
+
+ex reduce_phases(const ex& e, const quantum_numbers& numbers) {
+    reducer r(numbers);
+    return r.term(e, constraints{});
+}
+
+}  // namespace couplet

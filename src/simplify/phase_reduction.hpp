@@ -1,0 +1,23 @@
+// Rewriting every phase (-1)^X to the phase group's readable representative of its class,
+// given what the surrounding factors imply about the quantum numbers.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <stdexcept>
+
+#include "couplet/model/quantum.hpp"
+#include "couplet/simplify.hpp"
+
+namespace couplet {
+
+// An exponent that is not an integer at some admissible assignment; the message names the
+// exponent and the assignment.  simplify and check refuse such input.
+class phase_not_integer : public refusal {
+public:
+    using refusal::refusal;
+};
+
+GiNaC::ex reduce_phases(const GiNaC::ex& e, const quantum_numbers& numbers);
+
+}  // namespace couplet
