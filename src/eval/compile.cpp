@@ -3,6 +3,7 @@
 #include <algorithm>
 
 #include "couplet/model/lower.hpp"
+#include "couplet/model/structure.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/print/print.hpp"
 
@@ -123,6 +124,7 @@ private:
             case symbol_kind::triangle: n.kind = node_kind::triangle; break;
             default: throw evaluation_error("cannot evaluate " + n.text);
         }
+        n.source = e;
         for (const ex& a : e) n.forms.push_back(form(a));
     }
 
@@ -151,7 +153,7 @@ private:
 
     // Selection rules of the multiplicative factors: where one fails, that factor (and with
     // it the whole summand) vanishes, so the rules may bound the enumeration exactly.
-    static void collect_rules(const node& n, std::vector<selection_rule>& rules) {
+    void collect_rules(const node& n, std::vector<selection_rule>& rules) {
         switch (n.kind) {
             case node_kind::mul:
                 for (const auto& c : n.children) collect_rules(*c, rules);
@@ -164,35 +166,18 @@ private:
                     rules.insert(rules.end(), n.terms[0].rules.begin(), n.terms[0].rules.end());
                 return;
             case node_kind::threej:
-                triad(rules, n.forms[0], n.forms[1], n.forms[2]);
-                for (int k = 0; k < 3; ++k) projection(rules, n.forms[k], n.forms[3 + k]);
-                rules.push_back({rule_kind::zero, combine({{1, &n.forms[3]}, {1, &n.forms[4]}, {1, &n.forms[5]}})});
-                return;
             case node_kind::clebsch:
-                triad(rules, n.forms[0], n.forms[2], n.forms[4]);
-                for (int k = 0; k < 3; ++k) projection(rules, n.forms[2 * k], n.forms[2 * k + 1]);
-                rules.push_back({rule_kind::zero, combine({{1, &n.forms[1]}, {1, &n.forms[3]}, {-1, &n.forms[5]}})});
-                return;
-            case node_kind::sixj: {
-                const auto& f = n.forms;  // {a b c; d e f}: (abc) (aef) (dbf) (dec)
-                triad(rules, f[0], f[1], f[2]);
-                triad(rules, f[0], f[4], f[5]);
-                triad(rules, f[3], f[1], f[5]);
-                triad(rules, f[3], f[4], f[2]);
-                return;
-            }
-            case node_kind::ninej: {
-                const auto& f = n.forms;
-                for (int r = 0; r < 3; ++r) triad(rules, f[3 * r], f[3 * r + 1], f[3 * r + 2]);
-                for (int c = 0; c < 3; ++c) triad(rules, f[c], f[3 + c], f[6 + c]);
-                return;
-            }
+            case node_kind::sixj:
+            case node_kind::ninej:
             case node_kind::triangle:
-                triad(rules, n.forms[0], n.forms[1], n.forms[2]);
+            case node_kind::delta: {
+                coupling_structure st;
+                add_structure(n.source, st);
+                for (const auto& t : st.triads) triad(rules, form(t[0]), form(t[1]), form(t[2]));
+                for (const auto& [j, m] : st.projections) projection(rules, form(j), form(m));
+                for (const ex& z : st.zeros) rules.push_back({rule_kind::zero, form(z)});
                 return;
-            case node_kind::delta:
-                rules.push_back({rule_kind::zero, combine({{1, &n.forms[0]}, {-1, &n.forms[1]}})});
-                return;
+            }
             default: return;
         }
     }

@@ -50,6 +50,7 @@ struct node {
     std::vector<int> indices;       // sum
     std::vector<summand> terms;     // sum: the summands, each with its own bounds
     std::string text;               // for messages
+    GiNaC::ex source;               // coupling symbols: the symbol, for its selection rules
 };
 
 struct program {

@@ -6,6 +6,7 @@
 #include <sstream>
 
 #include "couplet/model/lower.hpp"
+#include "couplet/model/structure.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/phase/context.hpp"
 #include "couplet/print/print.hpp"
@@ -49,54 +50,18 @@ ex to_ex(const phase::linear_form& f, const quantum_numbers& numbers) {
     return out;
 }
 
-// What a product's factors imply: triads, j - m integral, m-sums, declared parities.
-struct constraints {
-    struct triad {
-        ex a, b, c;
-    };
-    std::vector<triad> triads;
-    std::vector<ex> integers;
-    std::vector<std::array<ex, 3>> zero_sums;
-    std::vector<ex> zeros;
-
+// What a product's multiplicative factors imply, nested sums' bodies included.
+struct constraints : coupling_structure {
     void add_factor(const ex& f) {
         if (is_a<mul>(f)) {
             for (const ex& g : f) add_factor(g);
-            return;
-        }
-        if (is_a<power>(f) && is_a<numeric>(f.op(1)) && ex_to<numeric>(f.op(1)).is_pos_integer()) {
+        } else if (is_a<power>(f) && is_a<numeric>(f.op(1)) && ex_to<numeric>(f.op(1)).is_pos_integer()) {
             add_factor(f.op(0));
-            return;
-        }
-        if (is_a<index_sum>(f)) {
+        } else if (is_a<index_sum>(f)) {
             const ex& body = ex_to<index_sum>(f).body();
             if (!is_a<add>(body)) add_factor(body);
-            return;
-        }
-        switch (kind_of(f)) {
-            case symbol_kind::threej:
-                triads.push_back({f.op(0), f.op(1), f.op(2)});
-                for (int k = 0; k < 3; ++k) integers.push_back(f.op(k) - f.op(3 + k));
-                zero_sums.push_back({f.op(3), f.op(4), f.op(5)});
-                break;
-            case symbol_kind::clebsch_gordan:
-                triads.push_back({f.op(0), f.op(2), f.op(4)});
-                for (int k = 0; k < 3; ++k) integers.push_back(f.op(2 * k) - f.op(2 * k + 1));
-                zero_sums.push_back({f.op(1), f.op(3), -f.op(5)});
-                break;
-            case symbol_kind::sixj:
-                triads.push_back({f.op(0), f.op(1), f.op(2)});
-                triads.push_back({f.op(0), f.op(4), f.op(5)});
-                triads.push_back({f.op(3), f.op(1), f.op(5)});
-                triads.push_back({f.op(3), f.op(4), f.op(2)});
-                break;
-            case symbol_kind::ninej:
-                for (int r = 0; r < 3; ++r) triads.push_back({f.op(3 * r), f.op(3 * r + 1), f.op(3 * r + 2)});
-                for (int c = 0; c < 3; ++c) triads.push_back({f.op(c), f.op(3 + c), f.op(6 + c)});
-                break;
-            case symbol_kind::triangle: triads.push_back({f.op(0), f.op(1), f.op(2)}); break;
-            case symbol_kind::delta: zeros.push_back(f.op(0) - f.op(1)); break;
-            default: break;
+        } else {
+            add_structure(f, *this);
         }
     }
 };
@@ -152,7 +117,7 @@ private:
         phase::context ctx;
         std::set<std::string> present = names_in(e);
         for (const auto& t : c.triads)
-            for (const ex& x : {t.a, t.b, t.c})
+            for (const ex& x : t)
                 for (const auto& n : names_in(x)) present.insert(n);
         // The readable order of the symmetries: angular momenta, then projections, by name.
         std::vector<const quantum_number*> ordered;
@@ -176,9 +141,8 @@ private:
                 ctx.declare_angular(q.name, p);
             }
         }
-        for (const auto& t : c.triads) ctx.add_triad(to_form(t.a), to_form(t.b), to_form(t.c));
-        for (const ex& i : c.integers) ctx.add_integer(to_form(i));
-        for (const auto& z : c.zero_sums) ctx.add_zero_sum(to_form(z[0]), to_form(z[1]), to_form(z[2]));
+        for (const auto& t : c.triads) ctx.add_triad(to_form(t[0]), to_form(t[1]), to_form(t[2]));
+        for (const auto& [j, m] : c.projections) ctx.add_integer(to_form(j - m));
         for (const ex& z : c.zeros) ctx.add_zero(to_form(z));
         return ctx;
     }
