@@ -162,10 +162,11 @@ ex& index_sum::let_op(size_t) {
 
 ex index_sum::subs(const exmap& m, unsigned options) const {
     exmap free_part;
-    for (const auto& [from, to] : m) {
+    for (const auto& entry : m) {
+        const ex& from = entry.first;
         bool bound = std::any_of(indices_.begin(), indices_.end(),
                                  [&](const ex& i) { return from.is_equal(i); });
-        if (!bound) free_part.emplace(from, to);
+        if (!bound) free_part.insert(entry);
     }
     ex b = body_.subs(free_part, options);
     if (b.is_equal(body_)) return *this;
