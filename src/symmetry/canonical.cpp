@@ -78,6 +78,25 @@ ex clebsch_as_threej(const ex& cg) {
     return make_phase(j1 - j2 + m) * sqrt(2 * j + 1) * wigner3j(j1, j2, j, m1, m2, -m);
 }
 
+ex threej_as_clebsch(const ex& s) {
+    const ex &a = s.op(0), &b = s.op(1), &c = s.op(2), &ma = s.op(3), &mb = s.op(4), &mc = s.op(5);
+    return make_phase(a - b - mc) * clebsch(a, ma, b, mb, c, -mc) / sqrt(2 * c + 1);
+}
+
+ex prefer_clebsch(const ex& e) {
+    struct rewrite : map_function {
+        ex operator()(const ex& x) override {
+            if (is_a<index_sum>(x)) {
+                const auto& s = ex_to<index_sum>(x);
+                return make_sum((*this)(s.body()), s.indices());
+            }
+            ex mapped = x.map(*this);
+            return kind_of(mapped) == symbol_kind::threej ? threej_as_clebsch(mapped) : mapped;
+        }
+    } r;
+    return r(e);
+}
+
 ex canonicalize_symbols(const ex& e, const quantum_numbers& numbers) {
     canonicalizer c(numbers);
     return c(e);

@@ -122,6 +122,12 @@ TEST_CASE("Clebsch-Gordan to 3j (DLMF 34.1.1) holds exactly", "[symmetry]") {
     check_transformation(s, {symmetry::clebsch_as_threej(s.symbol), 0}, draw, "CG as 3j");
 }
 
+TEST_CASE("3j to Clebsch-Gordan form (DLMF 34.1.1 read backwards) holds exactly", "[symmetry]") {
+    symbolic s(threej_text, threej_names);
+    testing::admissible_points gen(3412, 10);
+    check_transformation(s, {symmetry::threej_as_clebsch(s.symbol), 0}, [&] { return gen.threej(); }, "3j as CG");
+}
+
 TEST_CASE("simplify examples from the command line", "[symmetry][cli]") {
     auto simplify = [](const std::string& text) {
         auto r = testing::run_cli({"simplify", "--no-verify", "-e", text});

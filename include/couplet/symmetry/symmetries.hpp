@@ -45,6 +45,12 @@ transformed canonical(const GiNaC::ex& symbol, const quantum_numbers& numbers);
 // <j1 m1, j2 m2 | J M> -> (-1)^(j1-j2+M) sqrt(2J+1) 3j(j1, j2, J; m1, m2, -M)   (DLMF 34.1.1)
 GiNaC::ex clebsch_as_threej(const GiNaC::ex& cg);
 
+// 3j(a, b, c; ma, mb, mc) -> (-1)^(a-b-mc) <a ma, b mb | c -mc> / sqrt(2c+1)   (DLMF 34.1.1 read
+// backwards), for output in Clebsch-Gordan form.
+GiNaC::ex threej_as_clebsch(const GiNaC::ex& threej);
+// Rewrites every 3j of e in Clebsch-Gordan form.
+GiNaC::ex prefer_clebsch(const GiNaC::ex& e);
+
 // Replaces every CG by its 3j form and every 3j/6j/9j by phase * canonical representative.
 GiNaC::ex canonicalize_symbols(const GiNaC::ex& e, const quantum_numbers& numbers);
 
