@@ -1,0 +1,27 @@
+// Performing one move on one term: find the move's 3j among the term's, each brought to the
+// pattern's exact arrangement by a classical 3j symmetry (which returns its phase), with the
+// pattern's summed projections landing on summed projections of the term (m -> -m as a change
+// of summation variable where needed).  The phase left over must then be free of the
+// projections the move sums; it is made so with the vertex rules m1+m2+m3 = 0 and
+// (-1)^(2m) = (-1)^(2j), solved over GF(2).  Otherwise the move does not apply there.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <functional>
+#include <optional>
+
+#include "couplet/network/move.hpp"
+#include "couplet/network/term.hpp"
+
+namespace couplet::network {
+
+// A later stage's veto on a candidate result (the phase group must be able to prove every
+// exponent an integer from the result's own factors); the search then goes on.
+using result_check = std::function<bool(const GiNaC::ex&)>;
+
+// The term after the move, as sum(remaining indices : ...), or nothing when the move does not
+// apply anywhere in the term (or only where `accept` refuses).
+std::optional<GiNaC::ex> apply_move(const move& m, const msum_term& term, const result_check& accept = {});
+
+}  // namespace couplet::network

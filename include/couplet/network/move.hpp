@@ -1,0 +1,34 @@
+// The network moves, each one identity of DLMF chapter 34 written over its own pattern
+// symbols:  sum(summed : (-1)^phase * product of threejs) == result.
+// The graph only chooses where a move applies; apply_move (match.hpp) performs it on the 3j
+// symbols themselves, so each move is checked by exact evaluation of its two sides alone.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <string>
+#include <vector>
+
+#include "couplet/model/quantum.hpp"
+
+namespace couplet::network {
+
+struct move {
+    std::string name;
+    std::string reference;
+    std::vector<GiNaC::ex> threejs;  // top rows: pattern j's; bottom rows: +-pattern m's
+    GiNaC::ex phase = 0;             // exponent of (-1)
+    GiNaC::lst summed;               // the projections the identity sums over
+    GiNaC::ex result;
+};
+
+// In the order the reduction loop tries them: the largest closed piece first.
+const std::vector<move>& network_moves();
+
+// The quantum numbers of the pattern symbols (roles and owners), for evaluating a move.
+const quantum_numbers& pattern_numbers();
+
+// The left side of the identity as an expression.
+GiNaC::ex left_side(const move& m);
+
+}  // namespace couplet::network

@@ -1,0 +1,39 @@
+// Each network move is an identity between its pattern sum and its result; both sides are
+// evaluated exactly at random admissible points of the pattern's free quantum numbers.
+#include <catch2/catch.hpp>
+
+#include <iostream>
+
+#include "couplet/network/move.hpp"
+#include "network_points.hpp"
+
+using namespace couplet;
+
+TEST_CASE("every network move holds exactly at 200 random admissible points", "[network][moves]") {
+    // The identities are DLMF 34.6.1, 34.6.1 with 34.3.16, 34.4.1, 34.5.23, 34.3.16, and
+    // 34.3.16 with 34.3.1, as each move's `reference` names.
+    unsigned seed = 11;
+    for (const auto& m : network::network_moves()) {
+        INFO(m.name << " (" << m.reference << ")");
+        auto a = testing::compare_at_points(network::left_side(m), m.result, network::pattern_numbers(), seed++, 200, 4);
+        CHECK(a.points == 200);
+        CHECK(a.equal == a.points);
+        CHECK(a.nonzero > 20);  // the points test something
+        std::cout << "move " << m.name << ": " << a.equal << "/" << a.points << " points agree, " << a.nonzero
+                  << " nonzero\n";
+    }
+}
+
+TEST_CASE("a wrong phase in a move's pattern is caught by its self-test", "[network][moves]") {
+    // The triangle with the factor (-1)^(l1+u1) taken away no longer equals 3j x 6j (DLMF 34.5.23
+    // needs all three): the self-test can fail.
+    for (const auto& m : network::network_moves()) {
+        if (m.name != "triangle_to_threej_sixj") continue;
+        network::move broken = m;
+        const auto& q = network::pattern_numbers();
+        GiNaC::ex l1 = q.find("l1")->symbol, u1 = q.find("u1")->symbol;
+        broken.phase = m.phase - l1 - u1;
+        auto a = testing::compare_at_points(network::left_side(broken), m.result, network::pattern_numbers(), 5, 100, 4);
+        CHECK(a.equal < a.points);
+    }
+}
