@@ -1,0 +1,37 @@
+// The j-sum stage of simplify: applies the rules (rule.hpp) until none fires, and records every
+// step.
+//
+// Termination: every rewrite strictly lowers, in lexicographic order, (number of summation
+// indices, number of 9j, number of 6j, the multiset of symbol occurrences ranked by the readable
+// order).  Sum rules and delta collapse remove an index; a 9j is expanded (DLMF 34.6.2) only
+// together with a sum rule on another index that then fires, which keeps the indices and
+// removes the 9j; the zero-argument rules remove a 6j or a 9j; a vanishing term drops out; delta
+// elimination replaces a symbol by one earlier in the readable order.  Splitting or merging
+// sums is done only together with a rule that fires.  A step limit guards against a bug in
+// that argument.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <vector>
+
+#include "couplet/model/quantum.hpp"
+#include "couplet/rules/rule.hpp"
+
+namespace couplet::rules {
+
+struct jsum_result {
+    GiNaC::ex value;
+    std::vector<rule_step> trace;
+};
+
+// Equal to e at every assignment of its free quantum numbers.
+jsum_result reduce_jsums(const GiNaC::ex& e, const quantum_numbers& numbers);
+
+}  // namespace couplet
+
+namespace couplet {
+// The stage as simplify_expression calls it; the trace of the last call is kept for the CLI.
+GiNaC::ex apply_jsum_rules(const GiNaC::ex& e, const quantum_numbers& numbers);
+const std::vector<rules::rule_step>& last_jsum_trace();
+}  // namespace couplet

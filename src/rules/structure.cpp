@@ -1,0 +1,158 @@
+#include "rules/structure.hpp"
+
+#include <set>
+#include <stdexcept>
+
+#include "couplet/model/symbols.hpp"
+
+namespace couplet::rules {
+
+using namespace GiNaC;
+
+std::vector<triad> triads_of(const ex& f) {
+    std::vector<triad> out;
+    switch (kind_of(f)) {
+        case symbol_kind::threej: out.push_back({f.op(0), f.op(1), f.op(2)}); break;
+        case symbol_kind::clebsch_gordan: out.push_back({f.op(0), f.op(2), f.op(4)}); break;
+        case symbol_kind::sixj:  // {a b c; d e f}: (abc) (aef) (dbf) (dec)
+            out.push_back({f.op(0), f.op(1), f.op(2)});
+            out.push_back({f.op(0), f.op(4), f.op(5)});
+            out.push_back({f.op(3), f.op(1), f.op(5)});
+            out.push_back({f.op(3), f.op(4), f.op(2)});
+            break;
+        case symbol_kind::ninej:
+            for (int r = 0; r < 3; ++r) out.push_back({f.op(3 * r), f.op(3 * r + 1), f.op(3 * r + 2)});
+            for (int c = 0; c < 3; ++c) out.push_back({f.op(c), f.op(3 + c), f.op(6 + c)});
+            break;
+        case symbol_kind::triangle: out.push_back({f.op(0), f.op(1), f.op(2)}); break;
+        default: break;
+    }
+    return out;
+}
+
+std::vector<triad> all_triads(const ex& e) {
+    std::vector<triad> out;
+    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
+        auto t = triads_of(*it);
+        out.insert(out.end(), t.begin(), t.end());
+    }
+    return out;
+}
+
+std::vector<symmetry::transformed> arrangements(const ex& s) {
+    switch (kind_of(s)) {
+        case symbol_kind::sixj: return symmetry::sixj_orbit(s);
+        case symbol_kind::ninej: return symmetry::ninej_orbit(s);
+        case symbol_kind::triangle: {
+            // tri(a, b, c) is symmetric in its three arguments.
+            static const int perms[6][3] = {{0, 1, 2}, {0, 2, 1}, {1, 0, 2}, {1, 2, 0}, {2, 0, 1}, {2, 1, 0}};
+            std::vector<symmetry::transformed> out;
+            for (const auto& p : perms) out.push_back({triangle(s.op(p[0]), s.op(p[1]), s.op(p[2])).hold(), 0});
+            return out;
+        }
+        default: return {{s, 0}};
+    }
+}
+
+std::vector<ex> terms_of(const ex& e) {
+    std::vector<ex> out;
+    if (is_a<add>(e))
+        for (const ex& t : e) out.push_back(t);
+    else
+        out.push_back(e);
+    return out;
+}
+
+std::vector<ex> factors_of(const ex& term) {
+    std::vector<ex> out;
+    if (is_a<mul>(term))
+        for (const ex& f : term) out.push_back(f);
+    else
+        out.push_back(term);
+    return out;
+}
+
+namespace {
+cln::cl_RA rational_of(const ex& n) {
+    if (!is_a<numeric>(n) || !ex_to<numeric>(n).is_rational()) throw std::invalid_argument("not rational");
+    return cln::the<cln::cl_RA>(ex_to<numeric>(n).to_cl_N());
+}
+}  // namespace
+
+phase::linear_form form_of(const ex& e) {
+    phase::linear_form f;
+    ex x = e.expand();
+    auto take = [&](const ex& t) {
+        if (is_a<numeric>(t)) {
+            f += phase::linear_form(rational_of(t));
+        } else if (is_a<symbol>(t)) {
+            f += phase::linear_form::variable(ex_to<symbol>(t).get_name());
+        } else if (is_a<mul>(t) && t.nops() == 2 && (is_a<symbol>(t.op(0)) || is_a<symbol>(t.op(1)))) {
+            const ex& s = is_a<symbol>(t.op(0)) ? t.op(0) : t.op(1);
+            const ex& c = is_a<symbol>(t.op(0)) ? t.op(1) : t.op(0);
+            f += phase::linear_form::variable(ex_to<symbol>(s).get_name(), rational_of(c));
+        } else {
+            throw std::invalid_argument("not a linear form");
+        }
+    };
+    if (is_a<add>(x))
+        for (const ex& t : x) take(t);
+    else
+        take(x);
+    return f;
+}
+
+phase::context context_for(const ex& term, const quantum_numbers& numbers, const std::optional<symbol>& loose) {
+    phase::context ctx;
+    std::set<std::string> present;
+    for (const_preorder_iterator it = term.preorder_begin(); it != term.preorder_end(); ++it)
+        if (is_a<symbol>(*it)) present.insert(ex_to<symbol>(*it).get_name());
+    if (loose) present.insert(loose->get_name());
+    for (const std::string& name : present) {
+        const quantum_number* q = numbers.find(name);
+        bool is_loose = loose && loose->get_name() == name;
+        if (!q || is_loose) {
+            ctx.declare_angular(name, phase::parity::unknown);
+            continue;
+        }
+        phase::linear_form v = phase::linear_form::variable(name);
+        if (q->role == qn_role::projection) {
+            // Projections take any sign, so they enter as unconstrained half-integers.
+            ctx.declare_angular(name, phase::parity::unknown);
+            if (q->parity == qn_parity::integer) ctx.add_integer(v);
+            if (q->parity == qn_parity::half_odd) ctx.add_integer(v + phase::linear_form(cln::cl_RA(1) / 2));
+            continue;
+        }
+        ctx.declare_angular(name, q->parity == qn_parity::integer    ? phase::parity::integer
+                                  : q->parity == qn_parity::half_odd ? phase::parity::half_odd
+                                                                     : phase::parity::unknown);
+    }
+    for (const triad& t : all_triads(term)) {
+        try {
+            ctx.add_triad(form_of(t[0]), form_of(t[1]), form_of(t[2]));
+        } catch (const std::invalid_argument&) {
+            // A slot that is no linear form constrains nothing we can use.
+        }
+    }
+    return ctx;
+}
+
+bool same_phase(const phase::context& ctx, const ex& x, const ex& y) {
+    try {
+        return ctx.equal(form_of(x), form_of(y)) == phase::verdict::equal;
+    } catch (const std::invalid_argument&) {
+        return false;
+    }
+}
+
+ex without_phases(const ex& e) {
+    if (is_a<phase_factor>(e)) return 1;
+    if (is_a<mul>(e)) {
+        exvector ops;
+        for (const ex& o : e) ops.push_back(without_phases(o));
+        return mul(ops);
+    }
+    return e;
+}
+
+}  // namespace couplet::rules
