@@ -121,6 +121,7 @@ private:
                 for (const auto& n : names_in(x)) present.insert(n);
         // The readable order of the symmetries: angular momenta, then projections, by name.
         std::vector<const quantum_number*> ordered;
+        std::vector<ex> owner_links;
         for (const quantum_number& q : numbers_.all())
             if (present.count(q.name)) ordered.push_back(&q);
         std::sort(ordered.begin(), ordered.end(), [](const quantum_number* a, const quantum_number* b) {
@@ -134,6 +135,13 @@ private:
                                                                  : phase::parity::unknown;
             if (q.role == qn_role::projection) {
                 ctx.declare_angular(q.name, phase::parity::unknown);
+                // Admissibility ties a projection to its angular momentum even after the symbol
+                // that paired them has been reduced away.
+                if (q.owner) {
+                    bool owner_present = true;
+                    for (const auto& n : names_in(*q.owner)) owner_present = owner_present && present.count(n);
+                    if (owner_present) owner_links.push_back(*q.owner - q.symbol);
+                }
                 if (q.parity == qn_parity::integer) ctx.add_integer(phase::linear_form::variable(q.name));
                 if (q.parity == qn_parity::half_odd)
                     ctx.add_integer(phase::linear_form::variable(q.name) + phase::linear_form(cln::cl_RA(1) / 2));
@@ -141,6 +149,7 @@ private:
                 ctx.declare_angular(q.name, p);
             }
         }
+        for (const ex& link : owner_links) ctx.add_integer(to_form(link));
         for (const auto& t : c.triads) ctx.add_triad(to_form(t[0]), to_form(t[1]), to_form(t[2]));
         for (const auto& [j, m] : c.projections) ctx.add_integer(to_form(j - m));
         for (const ex& z : c.zeros) ctx.add_zero(to_form(z));

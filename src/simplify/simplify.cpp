@@ -1,6 +1,8 @@
 #include "couplet/simplify.hpp"
 
 #include "couplet/model/normalize.hpp"
+#include "couplet/network/reduce.hpp"
+#include "couplet/rules/engine.hpp"
 #include "couplet/symmetry/symmetries.hpp"
 #include "simplify/phase_reduction.hpp"
 
@@ -12,7 +14,9 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     GiNaC::ex x = normalize(e);
     x = symmetry::canonicalize_symbols(x, numbers);
     x = merge_phases(x.expand());
+    x = network::reduce_msums(x, numbers);
     x = reduce_phases(x, numbers);
+    x = apply_jsum_rules(x, numbers);
     return merge_phases(x);
 }
 
