@@ -1,10 +1,14 @@
 #include "cli/execute.hpp"
 
+#include <algorithm>
+#include <chrono>
+
 #include "couplet/eval/evaluate.hpp"
 #include "couplet/exact/number.hpp"
-#include "couplet/model/normalize.hpp"
 #include "couplet/print/print.hpp"
 #include "couplet/simplify.hpp"
+#include "couplet/verify/check_summary.hpp"
+#include "couplet/verify/simplification_check.hpp"
 
 namespace couplet::cli {
 
@@ -19,10 +23,53 @@ assignment values_of(const lowered_statement& s) {
     return at;
 }
 
-outcome simplify(const lowered_statement& s, const lowered_program& program) {
-    ex result = simplify_expression(s.value, program.numbers);
-    return {json{{"kind", "simplify"}, {"input", s.text}, {"result", to_text(result)},
-                 {"latex", to_latex(result)}, {"input_latex", to_latex(s.value)}}};
+ex run_simplifier(const ex& e, const lowered_program& program, const execute_options& options) {
+    return options.simplifier ? options.simplifier(e, program.numbers) : simplify_expression(e, program.numbers);
+}
+
+// A result is printed only once it agrees with the input at every sample point; a
+// disagreement is couplet's own bug, so the input is shown unsimplified and the run fails.
+outcome simplify(const lowered_statement& s, const lowered_program& program, const execute_options& options) {
+    auto started = std::chrono::steady_clock::now();
+    ex result = run_simplifier(s.value, program, options);
+    verify::verification_budget budget;
+    if (options.limit_verification_time)
+        budget.time = std::max<std::chrono::steady_clock::duration>(std::chrono::steady_clock::now() - started,
+                                                                    std::chrono::milliseconds(5));
+    json record{{"kind", "simplify"}, {"input", s.text}, {"result", to_text(result)},
+                {"latex", to_latex(result)}, {"input_latex", to_latex(s.value)},
+                {"verified", false}, {"points", 0}};
+    if (!options.verify_simplify) return {record};
+    verify::simplification_check v;
+    try {
+        v = verify::verify_simplification(s.value, result, program.numbers, options.sampling, options.progress, budget);
+    } catch (const evaluation_error& e) {
+        throw user_error(s.span.begin, std::string("cannot verify the simplification: ") + e.what() +
+                                           " (--no-verify prints it unverified)");
+    }
+    if (v.agrees) {
+        record["verified"] = true;
+        record["points"] = v.points;
+        record["nonzero_points"] = v.nonzero;
+        record["points_sampled"] = v.sampled;
+        return {record};
+    }
+    std::string what = !v.result_error.empty()
+                           ? "the result cannot be evaluated" + (v.counter ? " at " + verify::describe(*v.counter) : "") +
+                                 ": " + v.result_error
+                           : "at " + verify::describe(*v.counter) + " the input is " + v.counter->lhs.to_string() +
+                                 " but the result is " + v.counter->rhs.to_string();
+    outcome o;
+    o.record = record;
+    o.record["result"] = to_text(s.value);
+    o.record["latex"] = to_latex(s.value);
+    o.record["points"] = v.points;
+    o.record["internal_error"] = what;
+    o.internal_failure = true;
+    o.diagnostic = "couplet: internal check failed: simplifying '" + s.text + "' gave " + to_text(result) +
+                   ", which differs from the input: " + what + ".  The input is printed unsimplified; " +
+                   "please report this.\n";
+    return o;
 }
 
 outcome evaluate(const lowered_statement& s, const lowered_program& program) {
@@ -39,43 +86,47 @@ outcome evaluate(const lowered_statement& s, const lowered_program& program) {
                  {"input_latex", to_latex(s.value)}}};
 }
 
-// Until the identity engines exist a check is decided symbolically when the difference
-// normalizes to zero, and exactly when both sides are closed numbers.
-outcome check(const lowered_statement& s, const lowered_program& program) {
+// Decided by exact evaluation at sample points (and symbolically when the simplifier reduces
+// the difference to 0); a failure is diagnosed as a missing phase, a missing factor, or a
+// counterexample.
+outcome check(const lowered_statement& s, const lowered_program& program, const execute_options& options) {
     json record{{"kind", "check"}, {"input", s.text}, {"latex", to_latex(s.value) + " = " + to_latex(s.rhs)}};
-    ex difference = normalize(s.value - s.rhs).expand();
-    if (difference.is_zero()) {
-        record["holds"] = true;
-        record["verdict"] = "holds";
-        record["result"] = "holds (the two sides are the same expression)";
-        return {record};
-    }
-    evaluator eval(program.numbers);
-    exact::number lhs, rhs;
+    verify::check_options o;
+    o.sampling = options.sampling;
+    o.progress = options.progress;
+    o.simplifier = options.simplifier;
+    verify::check_report r;
     try {
-        lhs = eval(s.value, {});
-        rhs = eval(s.rhs, {});
+        r = verify::check_identity(s.value, s.rhs, program.numbers, o);
     } catch (const evaluation_error& e) {
-        throw user_error(s.span.begin, std::string("cannot decide this check yet: ") + e.what());
+        throw user_error(s.span.begin, std::string("cannot decide this check: ") + e.what());
     }
-    bool holds = lhs == rhs;
-    record["holds"] = holds;
-    record["verdict"] = holds ? "holds" : "fails";
-    record["result"] = holds ? "holds (both sides are " + lhs.to_string() + ")"
-                             : "fails: the left side is " + lhs.to_string() + ", the right side " +
-                                   rhs.to_string();
-    return {record, !holds};
+    if (r.symbolic_conflict) {
+        record["holds"] = nullptr;
+        record["verdict"] = "internal check failed";
+        record["result"] = "internal check failed (see the message on standard error)";
+        outcome out{record, false, true, ""};
+        out.diagnostic = "couplet: internal check failed: the simplifier reduced the difference of the two sides of '" +
+                         s.text + "' to 0, but " + verify::describe(*r.counter) + " gives " +
+                         r.counter->lhs.to_string() + " on the left and " + r.counter->rhs.to_string() +
+                         " on the right; please report this.\n";
+        return out;
+    }
+    record.update(verify::to_json(r));
+    record["result"] = verify::summary(r);
+    return {record, r.result != verify::verdict::holds};
 }
 
 }  // namespace
 
-outcome execute(const lowered_statement& s, const lowered_program& program, bare_meaning bare) {
+outcome execute(const lowered_statement& s, const lowered_program& program, bare_meaning bare,
+                const execute_options& options) {
     switch (s.kind) {
         case request_kind::simplify:
             if (s.bare && bare == bare_meaning::eval) return evaluate(s, program);
-            return simplify(s, program);
+            return simplify(s, program, options);
         case request_kind::eval: return evaluate(s, program);
-        case request_kind::check: return check(s, program);
+        case request_kind::check: return check(s, program, options);
         default: return {json()};
     }
 }

@@ -3,19 +3,38 @@
 
 #include <nlohmann/json.hpp>
 
+#include <string>
+
 #include "couplet/model/lower.hpp"
+#include "couplet/verify/identity_check.hpp"
 
 namespace couplet::cli {
 
 // What the subcommand makes of statements without a keyword.
 enum class bare_meaning { simplify, eval };
 
+// How `check` samples, and whether `simplify` verifies its results.
+struct execute_options {
+    verify::sampling_options sampling;
+    bool verify_simplify = true;
+    // At default settings a simplification's check takes about as long as the simplification
+    // did (at least 5 ms and 12 points); with explicit sampling options it checks every point.
+    bool limit_verification_time = true;
+    verify::progress_callback progress;
+    verify::simplifier_function simplifier;  // empty: simplify_expression
+};
+
 struct outcome {
     nlohmann::json record;   // {"kind", "input", "result", "latex", ...}
     bool check_failed = false;
+    // couplet caught itself in an error (a simplification that changes the value): the
+    // record shows the input unchanged and `diagnostic` says what went wrong.
+    bool internal_failure = false;
+    std::string diagnostic = {};
 };
 
 // Throws user_error (pointing at the statement) when the request cannot be carried out.
-outcome execute(const lowered_statement& s, const lowered_program& program, bare_meaning bare);
+outcome execute(const lowered_statement& s, const lowered_program& program, bare_meaning bare,
+                const execute_options& options = {});
 
 }  // namespace couplet::cli

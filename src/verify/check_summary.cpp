@@ -1,0 +1,75 @@
+#include "couplet/verify/check_summary.hpp"
+
+#include <sstream>
+
+#include "couplet/print/print.hpp"
+#include "couplet/verify/phase_fit.hpp"
+
+namespace couplet::verify {
+
+namespace {
+
+std::string evidence(const check_report& r) {
+    std::string out = "checked exactly at " + std::to_string(r.points) + " point" + (r.points == 1 ? "" : "s");
+    if (r.nonzero != 0 && r.points != r.nonzero) out += ", " + std::to_string(r.nonzero) + " of them nonzero";
+    return out;
+}
+
+std::string values_at(const counterexample& c) {
+    std::string where = c.at.empty() ? "" : "at " + describe(c) + ": ";
+    return where + "the left side is " + c.lhs.to_string() + ", the right side " + c.rhs.to_string();
+}
+
+}  // namespace
+
+std::string summary(const check_report& r) {
+    switch (r.result) {
+        case verdict::holds: {
+            if (r.points == 0) return "holds vacuously: " + r.note;
+            std::string out = "holds: ";
+            out += r.proved_symbolically ? "proved symbolically; " + evidence(r) : evidence(r) + " (no symbolic proof)";
+            if (!r.note.empty()) out += " (" + r.note + ")";
+            return out;
+        }
+        case verdict::fails_by_phase:
+            return "fails by a phase: holds after multiplying the right side by " + phase_text(*r.missing_phase) +
+                   "; " + evidence(r);
+        case verdict::fails_by_factor:
+            return "fails by a factor: holds after multiplying the right side by " + to_text(*r.missing_factor) +
+                   "; " + evidence(r);
+        default: {
+            std::string out = "fails: " + values_at(*r.counter);
+            if (!r.note.empty()) out += "; " + r.note;
+            return out;
+        }
+    }
+}
+
+nlohmann::json to_json(const counterexample& c) {
+    nlohmann::json at = nlohmann::json::object();
+    for (const auto& [name, value] : c.at) {
+        std::ostringstream os;
+        os << value;
+        at[name] = os.str();
+    }
+    return {{"at", at}, {"assignment", c.at.empty() ? "" : describe(c)}, {"lhs", c.lhs.to_string()},
+            {"rhs", c.rhs.to_string()}};
+}
+
+nlohmann::json to_json(const check_report& r) {
+    nlohmann::json j;
+    j["holds"] = r.result == verdict::holds;
+    j["verdict"] = verdict_name(r.result);
+    j["missing_phase"] = r.missing_phase ? nlohmann::json(phase_text(*r.missing_phase)) : nlohmann::json();
+    j["missing_factor"] = r.missing_factor ? nlohmann::json(to_text(*r.missing_factor)) : nlohmann::json();
+    j["points"] = r.points;
+    j["nonzero_points"] = r.nonzero;
+    j["symbolic_proof"] = r.proved_symbolically;
+    j["depth"] = r.depth;
+    j["exhaustive"] = r.complete;
+    j["counterexample"] = r.result != verdict::holds && r.counter ? to_json(*r.counter) : nlohmann::json();
+    j["note"] = r.note.empty() ? nlohmann::json() : nlohmann::json(r.note);
+    return j;
+}
+
+}  // namespace couplet::verify

@@ -1,0 +1,227 @@
+#include "couplet/verify/identity_check.hpp"
+
+#include <algorithm>
+#include <sstream>
+#include <stdexcept>
+
+#include "couplet/eval/evaluate.hpp"
+#include "couplet/model/symbols.hpp"
+#include "couplet/simplify.hpp"
+#include "couplet/verify/domain.hpp"
+#include "couplet/verify/phase_fit.hpp"
+#include "couplet/verify/tolerant_evaluation.hpp"
+#include "verify/factor_fit.hpp"
+
+namespace couplet::verify {
+
+using GiNaC::ex;
+
+std::string describe(const counterexample& c) {
+    std::string out;
+    for (const auto& [name, value] : c.at) {
+        std::ostringstream os;
+        os << name << "=" << value;
+        out += (out.empty() ? "" : ", ") + os.str();
+    }
+    return out.empty() ? "(no free quantum numbers)" : out;
+}
+
+const char* verdict_name(verdict v) {
+    switch (v) {
+        case verdict::holds: return "holds";
+        case verdict::fails_by_phase: return "fails by a phase";
+        case verdict::fails_by_factor: return "fails by a factor";
+        default: return "fails";
+    }
+}
+
+namespace {
+
+counterexample make_counterexample(const sampling_domain& d, const point& t, const exact::number& l,
+                                   const exact::number& r) {
+    counterexample c{{}, l, r};
+    for (std::size_t k = 0; k < t.size(); ++k) c.at.emplace_back(d.numbers[k].symbol.get_name(), GiNaC::numeric(t[k], 2));
+    return c;
+}
+
+// Both sides at every point, in order, stopping once no diagnosis can survive.
+class comparison {
+public:
+    comparison(const sampling_domain& d, const tolerant_expression& lhs, const tolerant_expression& rhs)
+        : d_(d), lhs_(lhs), rhs_(rhs) {}
+
+    void run(const std::vector<point>& points, const progress_callback& progress) {
+        for (std::size_t i = 0; i < points.size(); ++i) {
+            if (progress) progress(i, points.size());
+            if (!observe(points[i])) break;
+        }
+        if (progress) progress(points.size(), points.size());
+    }
+
+    bool all_equal() const { return all_equal_; }
+    std::size_t evaluated() const { return seen_.size(); }
+    std::size_t nonzero() const { return nonzero_; }
+    const std::vector<point>& seen() const { return seen_; }
+    const std::vector<exact::number>& rhs_values() const { return rhs_values_; }
+    const std::vector<exact::number>& lhs_values() const { return lhs_values_; }
+    const std::optional<counterexample>& first_mismatch() const { return mismatch_; }
+    bool one_side_vanishes() const { return one_side_vanishes_; }
+    std::vector<detail::factor_candidate>& candidates() { return candidates_; }
+
+private:
+    bool observe(const point& t) {
+        assignment at = to_assignment(d_, t);
+        exact::number l, r;
+        try {
+            l = lhs_.at(at);
+            r = rhs_.at(at);
+        } catch (const std::domain_error&) {
+            return true;  // a side divides by zero here: the identity says nothing at this point
+        }
+        seen_.push_back(t);
+        lhs_values_.push_back(l);
+        rhs_values_.push_back(r);
+        bool vanish = l.is_zero() && r.is_zero();
+        if (!vanish) ++nonzero_;
+        if (l != r && !mismatch_) {
+            mismatch_ = make_counterexample(d_, t, l, r);
+            one_side_vanishes_ = l.is_zero() || r.is_zero();
+            if (one_side_vanishes_) return stop();
+            // Diagnosis starts at the first mismatch: replay the points before it.
+            candidates_ = detail::simple_factors(d_);
+            for (std::size_t k = 0; k + 1 < seen_.size(); ++k) feed(seen_[k], lhs_values_[k], rhs_values_[k]);
+        }
+        if (l != r) all_equal_ = false;
+        if (mismatch_) {
+            if (!vanish && (l.is_zero() || r.is_zero())) return stop();
+            feed(t, l, r);
+            if (std::none_of(candidates_.begin(), candidates_.end(), [](const auto& c) { return c.alive(); }))
+                return false;
+        }
+        return true;
+    }
+
+    void feed(const point& t, const exact::number& l, const exact::number& r) {
+        if (l.is_zero() && r.is_zero()) {
+            for (auto& c : candidates_) c.observe_vanishing();
+            return;
+        }
+        exact::number ratio = l == r ? exact::number(1L) : l / r;
+        for (auto& c : candidates_) c.observe(ratio, t);
+    }
+
+    bool stop() {
+        all_equal_ = false;
+        for (auto& c : candidates_) c.kill();
+        return false;
+    }
+
+    const sampling_domain& d_;
+    const tolerant_expression& lhs_;
+    const tolerant_expression& rhs_;
+    bool all_equal_ = true;
+    bool one_side_vanishes_ = false;
+    std::size_t nonzero_ = 0;
+    std::vector<point> seen_;
+    std::vector<exact::number> lhs_values_, rhs_values_;
+    std::optional<counterexample> mismatch_;
+    std::vector<detail::factor_candidate> candidates_;
+};
+
+// The factor that would repair the right side, if candidate `c` explains every point.
+std::optional<std::pair<ex, std::optional<ex>>> repair(detail::factor_candidate& c, const std::vector<point>& points,
+                                                       const sampling_domain& d) {
+    if (!c.alive() || !c.observed()) return std::nullopt;
+    const auto& needs = c.needs();
+    bool any_flip = std::find(needs.begin(), needs.end(), sign_need::flip) != needs.end();
+    bool any_keep = std::find(needs.begin(), needs.end(), sign_need::keep) != needs.end();
+    ex size = to_ex(c.magnitude());
+    bool unit = c.shape() == detail::factor_shape::constant && c.magnitude() == exact::number(1L);
+    if (!any_flip) return std::make_pair(size * c.factor(), std::optional<ex>());
+    if (!any_keep && !unit) return std::make_pair(-size * c.factor(), std::optional<ex>());
+    std::optional<phase_exponent> fit = fit_phase(points, needs);
+    if (!fit) return std::nullopt;
+    ex exponent = exponent_ex(*fit, d);
+    return std::make_pair(size * c.factor() * make_phase(exponent), std::optional<ex>(exponent));
+}
+
+// The repaired identity LHS == RHS * fix, at the points already seen and at fresh ones.
+bool repair_holds(const ex& lhs, const ex& rhs, const ex& fix, const quantum_numbers& numbers, const sampling_domain& d,
+                  comparison& seen, const check_options& options) {
+    try {
+        compiled_expression factor(fix, numbers);
+        for (std::size_t k = 0; k < seen.evaluated(); ++k)
+            if (seen.lhs_values()[k] != seen.rhs_values()[k] * factor.at(to_assignment(d, seen.seen()[k])))
+                return false;
+        const auto& s = options.sampling;
+        std::size_t fresh_count = static_cast<std::size_t>(std::clamp(s.samples / 4, 10, 50));
+        int max_j = s.random_max_j > 0 ? s.random_max_j : s.depth + 4;
+        tolerant_expression l(lhs, numbers), r(rhs * fix, numbers);
+        for (const point& t : random_points(d, fresh_count, max_j, s.seed ^ 0x9e3779b97f4a7c15ULL, seen.seen(), s.depth)) {
+            assignment at = to_assignment(d, t);
+            try {
+                if (l.at(at) != r.at(at)) return false;
+            } catch (const std::domain_error&) {
+                continue;  // undefined here, as in the comparison
+            }
+        }
+    } catch (const evaluation_error&) {
+        return false;  // the fitted phase is not an integer somewhere: no repair
+    }
+    return true;
+}
+
+bool symbolically_zero(const ex& difference, const quantum_numbers& numbers, const check_options& options) {
+    try {
+        ex reduced = options.simplifier ? options.simplifier(difference, numbers) : simplify_expression(difference, numbers);
+        return reduced.is_zero();
+    } catch (const refusal&) {
+        return false;  // no proof; evaluation decides, and reports what it cannot evaluate
+    }
+}
+
+}  // namespace
+
+check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers& numbers, const check_options& options) {
+    check_report report;
+    report.depth = options.sampling.depth;
+    if (options.symbolic) report.proved_symbolically = symbolically_zero(lhs - rhs, numbers, options);
+
+    sampling_domain d = build_domain({lhs, rhs}, numbers);
+    sample_set samples = sample_points(d, options.sampling);
+    report.complete = samples.complete;
+    tolerant_expression left(lhs, numbers), right(rhs, numbers);
+    comparison cmp(d, left, right);
+    cmp.run(samples.points, options.progress);
+    report.points = cmp.evaluated();
+    report.nonzero = cmp.nonzero();
+
+    if (cmp.all_equal()) {
+        if (report.points == 0)
+            report.note = "no assignment of the free quantum numbers is admissible (declarations, triads and "
+                          "projections exclude them all), so the identity says nothing";
+        else if (report.nonzero == 0)
+            report.note = "both sides are 0 at every point checked, which proves little";
+        return report;
+    }
+    report.symbolic_conflict = report.proved_symbolically;
+    report.counter = cmp.first_mismatch();
+    for (auto& c : cmp.candidates()) {
+        auto fix = repair(c, cmp.seen(), d);
+        if (!fix || !repair_holds(lhs, rhs, fix->first, numbers, d, cmp, options)) continue;
+        bool phase_only = c.shape() == detail::factor_shape::constant && c.magnitude() == exact::number(1L);
+        report.result = phase_only ? verdict::fails_by_phase : verdict::fails_by_factor;
+        report.missing_factor = fix->first;
+        report.missing_phase = fix->second;
+        return report;
+    }
+    report.result = verdict::fails;
+    if (cmp.one_side_vanishes())
+        report.note = "one side is 0 where the other is not";
+    else if (!cmp.candidates().empty() && cmp.candidates().front().alive())
+        report.note = "LHS/RHS is +-" + cmp.candidates().front().magnitude().to_string() +
+                      " at every point, but no phase (-1)^(linear form) gives those signs";
+    return report;
+}
+
+}  // namespace couplet::verify

@@ -1,0 +1,31 @@
+// Running `check` on the last statement of a program text, for the verify tests.
+#pragma once
+
+#include <string>
+
+#include "couplet/print/print.hpp"
+#include "couplet/verify/identity_check.hpp"
+#include "couplet/verify/phase_fit.hpp"
+#include "support.hpp"
+
+namespace couplet::testing {
+
+struct checked {
+    verify::check_report report;
+    std::string missing_phase;   // "" when none
+    std::string missing_factor;  // "" when none
+};
+
+inline checked check_text(const std::string& text, int depth = 2, int samples = 200) {
+    lowered_program p = lower_text(text);
+    const lowered_statement& s = p.statements.back();
+    verify::check_options o;
+    o.sampling.depth = depth;
+    o.sampling.samples = samples;
+    checked c{verify::check_identity(s.value, s.rhs, p.numbers, o), "", ""};
+    if (c.report.missing_phase) c.missing_phase = verify::phase_text(*c.report.missing_phase);
+    if (c.report.missing_factor) c.missing_factor = to_text(*c.report.missing_factor);
+    return c;
+}
+
+}  // namespace couplet::testing
