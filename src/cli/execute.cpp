@@ -7,6 +7,9 @@
 #include "couplet/exact/number.hpp"
 #include "couplet/print/print.hpp"
 #include "couplet/simplify.hpp"
+#include "couplet/model/normalize.hpp"
+#include "couplet/symmetry/symmetries.hpp"
+#include "simplify/phase_reduction.hpp"
 #include "couplet/verify/check_summary.hpp"
 #include "couplet/verify/simplification_check.hpp"
 
@@ -24,7 +27,11 @@ assignment values_of(const lowered_statement& s) {
 }
 
 ex run_simplifier(const ex& e, const lowered_program& program, const execute_options& options) {
-    return options.simplifier ? options.simplifier(e, program.numbers) : simplify_expression(e, program.numbers);
+    ex result = options.simplifier ? options.simplifier(e, program.numbers) : simplify_expression(e, program.numbers);
+    // The CG form is applied before verification, so that what is printed is what was checked.
+    if (options.prefer_clebsch)
+        result = merge_phases(reduce_phases(merge_phases(symmetry::prefer_clebsch(result)), program.numbers));
+    return result;
 }
 
 // A result is printed only once it agrees with the input at every sample point; a

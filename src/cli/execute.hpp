@@ -22,6 +22,7 @@ struct execute_options {
     bool limit_verification_time = true;
     verify::progress_callback progress;
     verify::simplifier_function simplifier;  // empty: simplify_expression
+    bool prefer_clebsch = false;             // print results with CG instead of 3j symbols
 };
 
 struct outcome {

@@ -48,6 +48,7 @@ struct request {
     std::string command, file, text, format = "text";
     bool has_text = false, fragment = false, no_verify = false;
     int depth = 2, samples = 200;
+    std::string prefer = "3j";
 };
 
 std::string read_all(std::istream& in) {
@@ -66,6 +67,8 @@ void add_common_options(CLI::App& sub, request& r) {
     sub.add_option("--samples", r.samples, "Also check at N random points with larger j (default 200)")
         ->check(CLI::Range(0, 100000));
     sub.add_flag("--no-verify", r.no_verify, "Print simplifications without checking them against the input");
+    sub.add_option("--prefer", r.prefer, "Write results with 3j symbols (default) or Clebsch-Gordan coefficients")
+        ->check(CLI::IsMember({"3j", "cg"}));
 }
 
 }  // namespace
@@ -148,6 +151,7 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         options.sampling.depth = r.depth;
         options.sampling.samples = r.samples;
         options.verify_simplify = !r.no_verify;
+        options.prefer_clebsch = r.prefer == "cg";
         options.limit_verification_time = !explicit_sampling;
         // Progress goes to a terminal only: piped or captured stderr stays clean.
         std::optional<verify::terminal_progress> meter;

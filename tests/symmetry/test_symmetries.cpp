@@ -154,3 +154,14 @@ TEST_CASE("simplify refuses a phase that is not always an integer", "[symmetry][
     r = testing::run_cli({"simplify", "-e", "int j; (-1)^(j) * 3j(j, j, 0; m, -m, 0)"});
     CHECK(r.code == 0);
 }
+
+TEST_CASE("--prefer cg writes results with Clebsch-Gordan coefficients", "[symmetry][cli]") {
+    auto r = testing::run_cli({"simplify", "--prefer", "cg", "-e", "<j1 m1, j2 m2 | J M>"});
+    CHECK(r.code == 0);
+    CHECK(r.out == "<j1 m1, j2 m2 | J M>\n");
+    // CG orthogonality summed over m1, m2 (DLMF 34.3.16 in CG form) stays free of 3j symbols.
+    r = testing::run_cli({"simplify", "--prefer", "cg", "-e", "sum(m1, m2 : <a m1, b m2 | c m3> * <a m1, b m2 | d m4>)"});
+    CHECK(r.code == 0);
+    CHECK(r.out == "delta(c, d)*delta(m3, m4)*tri(a, b, c)\n");
+    CHECK(testing::run_cli({"simplify", "--prefer", "9j", "-e", "1"}).code == 2);
+}
