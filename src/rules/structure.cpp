@@ -1,5 +1,7 @@
 #include "rules/structure.hpp"
 
+#include "simplify/phase_reduction.hpp"
+
 #include <set>
 #include <stdexcept>
 
@@ -72,35 +74,7 @@ std::vector<ex> factors_of(const ex& term) {
     return out;
 }
 
-namespace {
-cln::cl_RA rational_of(const ex& n) {
-    if (!is_a<numeric>(n) || !ex_to<numeric>(n).is_rational()) throw std::invalid_argument("not rational");
-    return cln::the<cln::cl_RA>(ex_to<numeric>(n).to_cl_N());
-}
-}  // namespace
-
-phase::linear_form form_of(const ex& e) {
-    phase::linear_form f;
-    ex x = e.expand();
-    auto take = [&](const ex& t) {
-        if (is_a<numeric>(t)) {
-            f += phase::linear_form(rational_of(t));
-        } else if (is_a<symbol>(t)) {
-            f += phase::linear_form::variable(ex_to<symbol>(t).get_name());
-        } else if (is_a<mul>(t) && t.nops() == 2 && (is_a<symbol>(t.op(0)) || is_a<symbol>(t.op(1)))) {
-            const ex& s = is_a<symbol>(t.op(0)) ? t.op(0) : t.op(1);
-            const ex& c = is_a<symbol>(t.op(0)) ? t.op(1) : t.op(0);
-            f += phase::linear_form::variable(ex_to<symbol>(s).get_name(), rational_of(c));
-        } else {
-            throw std::invalid_argument("not a linear form");
-        }
-    };
-    if (is_a<add>(x))
-        for (const ex& t : x) take(t);
-    else
-        take(x);
-    return f;
-}
+phase::linear_form form_of(const ex& e) { return linear_form_of(e); }
 
 phase::context context_for(const ex& term, const quantum_numbers& numbers, const std::optional<symbol>& loose) {
     phase::context ctx;

@@ -17,10 +17,13 @@ namespace couplet {
 using namespace GiNaC;
 
 namespace {
+cln::cl_RA rational_of(const ex& n) {
+    if (!is_a<numeric>(n) || !ex_to<numeric>(n).is_rational()) throw std::invalid_argument("not rational");
+    return cln::the<cln::cl_RA>(ex_to<numeric>(n).to_cl_N());
+}
+}  // namespace
 
-cln::cl_RA rational_of(const ex& n) { return cln::the<cln::cl_RA>(ex_to<numeric>(n).to_cl_N()); }
-
-phase::linear_form to_form(const ex& e) {
+phase::linear_form linear_form_of(const ex& e) {
     phase::linear_form f;
     ex x = e.expand();
     auto take = [&](const ex& t) {
@@ -28,10 +31,12 @@ phase::linear_form to_form(const ex& e) {
             f += phase::linear_form(rational_of(t));
         } else if (is_a<symbol>(t)) {
             f += phase::linear_form::variable(ex_to<symbol>(t).get_name());
-        } else {
+        } else if (is_a<mul>(t) && t.nops() == 2 && (is_a<symbol>(t.op(0)) || is_a<symbol>(t.op(1)))) {
             const ex& s = is_a<symbol>(t.op(0)) ? t.op(0) : t.op(1);
             const ex& c = is_a<symbol>(t.op(0)) ? t.op(1) : t.op(0);
             f += phase::linear_form::variable(ex_to<symbol>(s).get_name(), rational_of(c));
+        } else {
+            throw std::invalid_argument("'" + to_text(e) + "' is not a linear form");
         }
     };
     if (is_a<add>(x))
@@ -40,6 +45,10 @@ phase::linear_form to_form(const ex& e) {
         take(x);
     return f;
 }
+
+namespace {
+
+phase::linear_form to_form(const ex& e) { return linear_form_of(e); }
 
 ex to_ex(const phase::linear_form& f, const quantum_numbers& numbers) {
     ex out = numeric(cln::cl_N(f.constant()));

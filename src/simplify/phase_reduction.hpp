@@ -7,6 +7,7 @@
 #include <stdexcept>
 
 #include "couplet/model/quantum.hpp"
+#include "couplet/phase/linear_form.hpp"
 #include "couplet/simplify.hpp"
 
 namespace couplet {
@@ -19,5 +20,8 @@ public:
 };
 
 GiNaC::ex reduce_phases(const GiNaC::ex& e, const quantum_numbers& numbers);
+
+// A linear GiNaC expression as the phase group's linear form; std::invalid_argument otherwise.
+phase::linear_form linear_form_of(const GiNaC::ex& e);
 
 }  // namespace couplet
