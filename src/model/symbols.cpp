@@ -1,5 +1,7 @@
 #include "couplet/model/symbols.hpp"
 
+#include "couplet/print/print.hpp"
+
 #include <algorithm>
 #include <cln/rational.h>
 
@@ -68,6 +70,11 @@ ex kdelta_eval(const ex& x, const ex& y) {
     ex diff = (x - y).expand();
     if (diff.is_zero()) return 1;
     if (is_num(diff)) return 0;
+    // delta is symmetric: one argument order, chosen by the printed forms (never by GiNaC's
+    // hash order), so equal deltas print and collect alike.
+    std::string tx = to_text(x), ty = to_text(y);
+    if (tx != ty && !(is_a<symbol>(x) && is_a<symbol>(y) ? readable_name_less(tx, ty) : tx < ty))
+        return kdelta(y, x).hold();
     return kdelta(x, y).hold();
 }
 

@@ -94,7 +94,11 @@ std::string show(const phase::assignment& a) {
 
 class reducer {
 public:
-    explicit reducer(const quantum_numbers& numbers) : numbers_(numbers) {}
+    reducer(const ex& whole, const quantum_numbers& numbers) : numbers_(numbers) {
+        for (const_preorder_iterator it = whole.preorder_begin(); it != whole.preorder_end(); ++it)
+            if (is_a<index_sum>(*it))
+                for (const ex& i : ex_to<index_sum>(*it).indices()) bound_names_.insert(ex_to<symbol>(i).get_name());
+    }
 
     ex term(const ex& e, const constraints& inherited) {
         if (is_a<add>(e)) {
@@ -146,7 +150,9 @@ private:
                 ctx.declare_angular(q.name, phase::parity::unknown);
                 // Admissibility ties a projection to its angular momentum even after the symbol
                 // that paired them has been reduced away.
-                if (q.owner) {
+                // Not for a name that is also a summation index: the table has one owner per
+                // name, and a bound index may belong to another j.
+                if (q.owner && !bound_names_.count(q.name)) {
                     bool owner_present = true;
                     for (const auto& n : names_in(*q.owner)) owner_present = owner_present && present.count(n);
                     if (owner_present) owner_links.push_back(*q.owner - q.symbol);
@@ -177,12 +183,13 @@ private:
     }
 
     const quantum_numbers& numbers_;
+    std::set<std::string> bound_names_;
 };
 
 }  // namespace
 
 ex reduce_phases(const ex& e, const quantum_numbers& numbers) {
-    reducer r(numbers);
+    reducer r(e, numbers);
     return r.term(e, constraints{});
 }
 

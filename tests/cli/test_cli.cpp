@@ -76,7 +76,7 @@ TEST_CASE("usage errors exit 2 with a message", "[cli]") {
     CHECK(r.err.find("not both") != std::string::npos);
 }
 
-TEST_CASE("--help states the commands and the conventions", "[cli]") {
+TEST_CASE("the help text states the commands and the conventions", "[cli]") {
     auto r = run_cli({"--help"});
     CHECK(r.code == 0);
     for (const char* word : {"simplify", "check", "eval", "latex", "Condon-Shortley", "(-1)^(j1-j2+M)", "Exit status"})

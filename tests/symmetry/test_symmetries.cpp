@@ -155,7 +155,7 @@ TEST_CASE("simplify refuses a phase that is not always an integer", "[symmetry][
     CHECK(r.code == 0);
 }
 
-TEST_CASE("--prefer cg writes results with Clebsch-Gordan coefficients", "[symmetry][cli]") {
+TEST_CASE("the option --prefer cg writes results with Clebsch-Gordan coefficients", "[symmetry][cli]") {
     auto r = testing::run_cli({"simplify", "--prefer", "cg", "-e", "<j1 m1, j2 m2 | J M>"});
     CHECK(r.code == 0);
     CHECK(r.out == "<j1 m1, j2 m2 | J M>\n");

@@ -51,7 +51,7 @@ TEST_CASE("simplify JSON reports the verification", "[verify][cli]") {
     CHECK(j.at("points") == 0);
 }
 
-TEST_CASE("--samples and --depth set how many points are checked", "[verify][cli]") {
+TEST_CASE("the options --samples and --depth set how many points are checked", "[verify][cli]") {
     auto run = [](std::vector<std::string> extra) {
         std::vector<std::string> args{"simplify", "--format", "json", "-e", "6j{a, b, c; d, e, f}"};
         args.insert(args.begin() + 1, extra.begin(), extra.end());
