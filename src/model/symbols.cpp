@@ -1,5 +1,7 @@
 #include "couplet/model/symbols.hpp"
 
+#include "couplet/model/structure.hpp"
+
 #include "couplet/print/print.hpp"
 
 #include <algorithm>
@@ -30,40 +32,37 @@ bool numeric_projection_fails(const ex& j, const ex& m) {
     return !(jj - mm).is_integer() || abs(mm) > jj;
 }
 
+// A symbol (held, so that building it does not recurse into eval) is 0 when any of its
+// selection rules already fails with numbers; coupling_structure lists the rules.
+ex zero_or_held(const ex& held) {
+    coupling_structure rules;
+    add_structure(held, rules);
+    for (const auto& t : rules.triads)
+        if (numeric_triangle_fails(t[0], t[1], t[2])) return 0;
+    for (const auto& [j, m] : rules.projections)
+        if (numeric_projection_fails(j, m)) return 0;
+    for (const ex& z : rules.zeros) {
+        ex v = z.expand();
+        if (is_num(v) && !v.is_zero()) return 0;
+    }
+    return held;
+}
+
 ex wigner3j_eval(const ex& j1, const ex& j2, const ex& j3, const ex& m1, const ex& m2, const ex& m3) {
-    ex msum = (m1 + m2 + m3).expand();
-    if ((is_num(msum) && !msum.is_zero()) || numeric_triangle_fails(j1, j2, j3) ||
-        numeric_projection_fails(j1, m1) || numeric_projection_fails(j2, m2) ||
-        numeric_projection_fails(j3, m3))
-        return 0;
-    return wigner3j(j1, j2, j3, m1, m2, m3).hold();
+    return zero_or_held(wigner3j(j1, j2, j3, m1, m2, m3).hold());
 }
 
 ex clebsch_eval(const ex& j1, const ex& m1, const ex& j2, const ex& m2, const ex& j, const ex& m) {
-    ex msum = (m1 + m2 - m).expand();
-    if ((is_num(msum) && !msum.is_zero()) || numeric_triangle_fails(j1, j2, j) ||
-        numeric_projection_fails(j1, m1) || numeric_projection_fails(j2, m2) ||
-        numeric_projection_fails(j, m))
-        return 0;
-    return clebsch(j1, m1, j2, m2, j, m).hold();
+    return zero_or_held(clebsch(j1, m1, j2, m2, j, m).hold());
 }
 
 ex wigner6j_eval(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e, const ex& f) {
-    // Triads of {a b c; d e f}: (a b c), (a e f), (d b f), (d e c).
-    if (numeric_triangle_fails(a, b, c) || numeric_triangle_fails(a, e, f) ||
-        numeric_triangle_fails(d, b, f) || numeric_triangle_fails(d, e, c))
-        return 0;
-    return wigner6j(a, b, c, d, e, f).hold();
+    return zero_or_held(wigner6j(a, b, c, d, e, f).hold());
 }
 
 ex wigner9j_eval(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e, const ex& f,
                  const ex& g, const ex& h, const ex& i) {
-    // Triads: the three rows and the three columns.
-    if (numeric_triangle_fails(a, b, c) || numeric_triangle_fails(d, e, f) ||
-        numeric_triangle_fails(g, h, i) || numeric_triangle_fails(a, d, g) ||
-        numeric_triangle_fails(b, e, h) || numeric_triangle_fails(c, f, i))
-        return 0;
-    return wigner9j(a, b, c, d, e, f, g, h, i).hold();
+    return zero_or_held(wigner9j(a, b, c, d, e, f, g, h, i).hold());
 }
 
 ex kdelta_eval(const ex& x, const ex& y) {
