@@ -6,6 +6,7 @@
 #include <map>
 #include <set>
 
+#include "couplet/model/fresh_index.hpp"
 #include "couplet/model/normalize.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/print/print.hpp"
@@ -326,7 +327,7 @@ private:
         std::vector<ex> factors = factors_of(body);
         for (size_t k = 0; k < factors.size(); ++k) {
             if (kind_of(factors[k]) != symbol_kind::ninej || !factors[k].has(y)) continue;
-            symbol x = fresh_index(term);
+            symbol x = fresh_index(term, numbers_);
             std::vector<ex> others = factors;
             others.erase(others.begin() + static_cast<long>(k));
             for (const auto& image : symmetry::ninej_orbit(factors[k])) {
@@ -375,21 +376,6 @@ private:
         return std::nullopt;
     }
 
-    symbol fresh_index(const ex& term) {
-        std::set<std::string> taken;
-        for (const quantum_number& q : numbers_.all()) taken.insert(q.name);
-        for (const_preorder_iterator it = term.preorder_begin(); it != term.preorder_end(); ++it)
-            if (is_a<symbol>(*it)) taken.insert(ex_to<symbol>(*it).get_name());
-        for (int n = 1;; ++n) {
-            std::string name = "x" + std::to_string(n);
-            if (!taken.count(name)) {
-                auto known = fresh_.find(name);
-                if (known == fresh_.end()) known = fresh_.emplace(name, symbol(name)).first;
-                return known->second;
-            }
-        }
-    }
-
     // sum(x : delta(x, T) f(x)) = f(T): x runs over the half-integers (of its declared parity)
     // that its factors allow, so T must be such a value at every assignment.
     std::optional<ex> collapse_delta(const ex& term, const symbol& x, const std::vector<ex>& with_x) {
@@ -426,7 +412,6 @@ private:
     }
 
     const quantum_numbers& numbers_;
-    std::map<std::string, symbol> fresh_;  // one symbol per fresh name
 };
 
 }  // namespace
