@@ -3,6 +3,7 @@
 #include <unistd.h>
 
 #include <CLI/CLI.hpp>
+#include <chrono>
 #include <cstdio>
 #include <fstream>
 #include <iostream>
@@ -11,14 +12,16 @@
 
 #include "cli/execute.hpp"
 #include "cli/report.hpp"
+#include "couplet/eval/evaluate.hpp"
 #include "couplet/model/lower.hpp"
+#include "couplet/run_limits.hpp"
 #include "couplet/simplify.hpp"
 #include "couplet/verify/progress.hpp"
 
 namespace couplet::cli {
 namespace {
 
-const char* const conventions_text = R"(Conventions:
+const char* const conventions_text_head = R"(Conventions:
   Condon-Shortley phases: the ladder coefficients sqrt((j-+m)(j+-m+1)) are real and
   non-negative, and <j1 j1, j2 J-j1 | J J> > 0.  All 3j and CG values are real.
   <j1 m1, j2 m2 | J M> = (-1)^(j1-j2+M) sqrt(2J+1) 3j(j1, j2, J; m1, m2, -M).
@@ -41,14 +44,35 @@ and at --samples random points with larger j (default 200).  At default settings
 checks fresh points of these kinds for about as long as the simplification took (at least
 12 points); give --depth or --samples to check them all.
 
-Exit status: 0 done (every check holds), 1 a check fails, 2 bad input or a refused request,
+)";
+
+const char* const exit_status_text = R"(Exit status: 0 done (every check holds), 1 a check fails, 2 bad input or a refused request,
 3 an internal check failed (a simplification changed the value; the input is printed as is).)";
+
+// Written from the constants themselves, so the help cannot drift from what is enforced.
+std::string bounds_text() {
+    std::ostringstream os;
+    evaluation_limits eval;
+    os << "Bounds (each stops the statement with a message and exit status 2):\n"
+       << "  --max-terms N (default " << run_limits{}.max_terms << ") terms from expanding one expression or one\n"
+       << "    sum's body;  --time-limit S (default none) wall-clock seconds for the whole input;\n"
+       << "  2j <= " << eval.max_twice_j << " for every entry of a symbol; " << eval.max_sum_terms
+       << " summands in one evaluation;\n"
+       << "  nesting of parentheses, calls and powers at most " << max_nesting << " deep; numbers of at most "
+       << max_number_digits << " digits;\n"
+       << "  integer powers x^n with |n| <= " << max_integer_exponent << ".\n\n";
+    return os.str();
+}
+
+std::string conventions_text() { return conventions_text_head + bounds_text() + exit_status_text; }
 
 struct request {
     std::string command, file, text, format = "text";
     bool has_text = false, fragment = false, no_verify = false;
     int depth = 2, samples = 200;
     std::string prefer = "3j";
+    std::size_t max_terms = run_limits{}.max_terms;
+    double time_limit = 0;  // seconds; 0: none
 };
 
 std::string read_all(std::istream& in) {
@@ -69,6 +93,27 @@ void add_common_options(CLI::App& sub, request& r) {
     sub.add_flag("--no-verify", r.no_verify, "Print simplifications without checking them against the input");
     sub.add_option("--prefer", r.prefer, "Write results with 3j symbols (default) or Clebsch-Gordan coefficients")
         ->check(CLI::IsMember({"3j", "cg"}));
+    sub.add_option("--max-terms", r.max_terms,
+                   "Refuse to expand an expression into more than N terms (default 100000)")
+        ->check(CLI::Range(std::size_t{1}, std::size_t{1000000000}));
+    sub.add_option("--time-limit", r.time_limit,
+                   "Stop after SECONDS of wall-clock time; statements finished by then are printed (default: none)")
+        ->check(CLI::Range(0.001, 1e6));
+}
+
+// The statement's own message when the time limit stops it, saying what is complete.
+std::string stopped_message(double seconds, std::size_t done, std::size_t not_started) {
+    std::ostringstream os;
+    os << "stopped: the time limit of " << seconds << " s was reached while working on this statement; ";
+    if (done == 0)
+        os << "no statement was finished";
+    else
+        os << "the " << done << " statement" << (done == 1 ? "" : "s") << " before it " << (done == 1 ? "is" : "are")
+           << " complete and printed";
+    if (not_started > 0)
+        os << ", the " << not_started << " after it " << (not_started == 1 ? "was" : "were") << " not started";
+    os << " (raise --time-limit)";
+    return os.str();
 }
 
 }  // namespace
@@ -76,7 +121,8 @@ void add_common_options(CLI::App& sub, request& r) {
 int run(const std::vector<std::string>& args, std::istream& in, std::ostream& out, std::ostream& err) {
     CLI::App app{"couplet: sums over magnetic quantum numbers of 3j and Clebsch-Gordan products,\n"
                  "reduced and checked by exact arithmetic."};
-    app.footer(conventions_text);
+    app.name("couplet");
+    app.footer(conventions_text());
     app.require_subcommand(1, 1);
     request r;
     struct command_info {
@@ -84,8 +130,8 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         const char* help;
     };
     const command_info commands[] = {
-        {"simplify", "Simplify each expression (currently: merges phases and collects factors)"},
-        {"check", "Decide each 'A == B'"},
+        {"simplify", "Reduce each expression (m-sums, then sums over j) and check the result exactly"},
+        {"check", "Decide each 'A == B' and diagnose a missing phase or factor"},
         {"eval", "Evaluate each expression exactly ('at' gives values)"},
         {"latex", "Print the statements as a LaTeX document (amsmath)"},
     };
@@ -159,13 +205,25 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
             meter.emplace(err);
             options.progress = meter->callback();
         }
+        run_limits limits;
+        limits.max_terms = r.max_terms;
+        if (r.time_limit > 0)
+            limits.deadline = std::chrono::steady_clock::now() +
+                              std::chrono::duration_cast<std::chrono::steady_clock::duration>(
+                                  std::chrono::duration<double>(r.time_limit));
+        scoped_run_limits in_force(limits);
         rep.begin();
-        for (const lowered_statement& s : program.statements) {
+        const auto& statements = program.statements;
+        for (std::size_t k = 0; k < statements.size(); ++k) {
+            const lowered_statement& s = statements[k];
             outcome o;
             try {
+                check_deadline();
                 o = execute(s, program, bare, options);
             } catch (const refusal& e) {
                 throw user_error(s.span.begin, e.what());
+            } catch (const time_limit_reached&) {
+                throw user_error(s.span.begin, stopped_message(r.time_limit, k, statements.size() - k - 1));
             }
             if (!o.record.is_null()) rep.statement(o.record);
             if (!o.diagnostic.empty()) err << o.diagnostic;

@@ -35,8 +35,6 @@ bool is_linear_form(const ex& e) {
 
 namespace {
 
-constexpr std::size_t max_number_digits = 200;
-constexpr long max_integer_exponent = 1000;
 
 std::size_t offset_of(const ast::operand& o);
 

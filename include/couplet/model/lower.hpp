@@ -3,6 +3,7 @@
 
 #include <ginac/ginac.h>
 
+#include <cstddef>
 #include <string>
 #include <vector>
 
@@ -10,6 +11,10 @@
 #include "couplet/parse.hpp"
 
 namespace couplet {
+
+// Bounds on what lowering accepts, so that no literal can exhaust memory.
+constexpr std::size_t max_number_digits = 200;
+constexpr long max_integer_exponent = 1000;  // |n| in x^n
 
 enum class request_kind { declaration, definition, simplify, check, eval };
 
