@@ -1,6 +1,10 @@
 #include "eval/compile.hpp"
 
 #include <algorithm>
+#include <cln/integer.h>
+#include <set>
+
+#include "eval/plan.hpp"
 
 #include "couplet/model/lower.hpp"
 #include "couplet/model/structure.hpp"
@@ -14,6 +18,26 @@ using namespace GiNaC;
 namespace {
 
 cln::cl_RA rational_of(const numeric& n) { return cln::the<cln::cl_RA>(n.to_cl_N()); }
+
+void add_slots(std::vector<int>& into, const std::vector<int>& more) {
+    std::vector<int> merged;
+    std::set_union(into.begin(), into.end(), more.begin(), more.end(), std::back_inserter(merged));
+    into.swap(merged);
+}
+
+std::vector<int> slots_of(const linear& f) {
+    std::vector<int> out;
+    for (const auto& term : f.terms) out.push_back(term.first);
+    std::sort(out.begin(), out.end());
+    out.erase(std::unique(out.begin(), out.end()), out.end());
+    return out;
+}
+
+bool mentions(const linear& f, const std::vector<int>& slots) {
+    for (const auto& term : f.terms)
+        if (std::find(slots.begin(), slots.end(), term.first) != slots.end()) return true;
+    return false;
+}
 
 class compiler {
 public:
@@ -43,10 +67,26 @@ public:
         } else {
             build_symbol(*n, e);
         }
+        note_slots(*n);
         return n;
     }
 
+    bool doubled_forms_fit() const { return doubled_fit_; }
+
 private:
+    void note_slots(node& n) {
+        if (n.kind == node_kind::variable) n.slots = {n.slot};
+        for (const auto& c : n.children) add_slots(n.slots, c->slots);
+        for (const auto& f : n.forms) add_slots(n.slots, slots_of(f));
+        if (n.kind == node_kind::sum) {
+            for (const auto& t : n.terms) add_slots(n.slots, t.body->slots);
+            std::vector<int> outside;
+            for (int k : n.slots)
+                if (std::find(n.indices.begin(), n.indices.end(), k) == n.indices.end()) outside.push_back(k);
+            n.slots = outside;
+        }
+    }
+
     int slot(const symbol& s) {
         int k = ensure_slot(s);
         note_free(k);
@@ -94,6 +134,8 @@ private:
             for (const ex& t : x) take(t);
         else
             take(x);
+        fill_doubled(f);
+        doubled_fit_ = doubled_fit_ && f.doubled.fits;
         return f;
     }
 
@@ -146,6 +188,12 @@ private:
             summand piece;
             piece.body = build(t);
             collect_rules(*piece.body, piece.rules);
+            for (const auto& r : piece.rules) doubled_fit_ = doubled_fit_ && r.form.doubled.fits;
+            if (piece.body->kind == node_kind::mul)
+                for (const auto& c : piece.body->children) piece.factors.push_back(c.get());
+            else
+                piece.factors.push_back(piece.body.get());
+            piece.plan = make_plan(piece.rules, piece.factors, n.indices, p_.slot_names);
             n.terms.push_back(std::move(piece));
         }
         bound_ = outer_bound;
@@ -162,8 +210,11 @@ private:
                 if (n.exponent > 0) collect_rules(*n.children[0], rules);
                 return;
             case node_kind::sum:
+                // Rules on the inner indices are the inner sum's business; the others vanish
+                // the whole inner sum, so they also bound the outer enumeration.
                 if (n.terms.size() == 1)
-                    rules.insert(rules.end(), n.terms[0].rules.begin(), n.terms[0].rules.end());
+                    for (const auto& r : n.terms[0].rules)
+                        if (!mentions(r.form, n.indices)) rules.push_back(r);
                 return;
             case node_kind::threej:
             case node_kind::clebsch:
@@ -191,6 +242,7 @@ private:
         }
         for (const auto& [s, k] : acc)
             if (!cln::zerop(k)) out.terms.emplace_back(s, k);
+        fill_doubled(out);
         return out;
     }
 
@@ -219,14 +271,40 @@ private:
     program& p_;
     const quantum_numbers& numbers_;
     std::vector<int> bound_;
+    bool doubled_fit_ = true;
 };
 
 }  // namespace
+
+void fill_doubled(linear& f) {
+    std::map<int, cln::cl_RA> merged;
+    for (const auto& [s, c] : f.terms) merged[s] += c;
+    // 2 * value = 2 * constant + sum c * t; scaled by the common denominator.
+    cln::cl_I scale = cln::denominator(2 * f.constant);
+    for (const auto& [s, c] : merged) scale = cln::lcm(scale, cln::denominator(c));
+    const cln::cl_I limit = cln::cl_I(1) << 40;
+    auto to_long = [&](const cln::cl_RA& q, long& out) {
+        cln::cl_I i = cln::the<cln::cl_I>(q);
+        if (cln::abs(i) >= limit) return false;
+        out = cln::cl_I_to_long(i);
+        return true;
+    };
+    linear::doubled_form d;
+    d.fits = to_long(scale, d.scale) && to_long(2 * f.constant * scale, d.constant);
+    for (const auto& [s, c] : merged) {
+        if (cln::zerop(c)) continue;
+        long k = 0;
+        d.fits = to_long(c * scale, k) && d.fits;
+        d.terms.emplace_back(s, k);
+    }
+    f.doubled = d;
+}
 
 program compile(const ex& e, const quantum_numbers& numbers) {
     program p;
     compiler c(p, numbers);
     p.root = c.build(e);
+    p.doubled_forms_fit = c.doubled_forms_fit();
     return p;
 }
 

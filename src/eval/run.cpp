@@ -1,5 +1,7 @@
 // Running a compiled expression: exact arithmetic, with summation indices enumerated over
-// exactly the values their selection rules admit.
+// exactly the values their selection rules admit.  This file holds the plain interval
+// enumeration with rational values; compiled_expression::at takes the propagating one
+// (propagate.cpp) wherever it applies.
 #include <cln/integer.h>
 #include <cln/rational.h>
 #include <cln/rational_io.h>
@@ -8,9 +10,10 @@
 #include <optional>
 #include <sstream>
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "couplet/run_limits.hpp"
 #include "eval/compile.hpp"
+#include "eval/node_runner.hpp"
+#include "eval/propagate.hpp"
 
 namespace couplet {
 
@@ -31,56 +34,28 @@ std::string show(const cln::cl_RA& q) {
     return os.str();
 }
 
-class machine {
+// The interval enumeration (sum_enumeration::intervals) with rational values.
+class machine : public eval_detail::node_runner<machine> {
 public:
     machine(const eval_detail::program& p, const evaluation_limits& limits)
-        : p_(p), limits_(limits), value_(p.slot_names.size()), known_(p.slot_names.size(), false) {}
+        : node_runner(nullptr), p_(p), limits_(limits), value_(p.slot_names.size()), known_(p.slot_names.size(), false) {}
 
     void assign(int slot, const cln::cl_RA& v) {
         value_[slot] = v;
         known_[slot] = true;
     }
 
-    exact::number run(const node& n) {
-        switch (n.kind) {
-            case node_kind::constant: return n.value;
-            case node_kind::variable: return exact::number(value_[n.slot]);
-            case node_kind::add: {
-                exact::number s;
-                for (const auto& c : n.children) s += run(*c);
-                return s;
-            }
-            case node_kind::mul: {
-                exact::number s(1L);
-                for (const auto& c : n.children) {
-                    s *= run(*c);
-                    if (s.is_zero()) break;
-                }
-                return s;
-            }
-            case node_kind::power: return exact::power(run(*n.children[0]), n.exponent);
-            case node_kind::root_power: {
-                exact::number base = run(*n.children[0]);
-                if (!base.is_rational() || cln::minusp(base.rational_value()))
-                    throw evaluation_error("sqrt of " + base.to_string() + " (in " + n.text +
-                                           ") is not a real square root of a rational");
-                return exact::power(exact::number::sqrt_of(base.rational_value()), n.exponent);
-            }
-            case node_kind::phase: {
-                cln::cl_RA x = value(n.forms[0]);
-                if (!is_integer(x))
-                    throw evaluation_error("the exponent of (-1)^(" + n.forms[0].text + ") is " + show(x) +
-                                           " here, not an integer");
-                return exact::number(cln::oddp(cln::the<cln::cl_I>(x)) ? -1L : 1L);
-            }
-            case node_kind::delta: return exact::number(value(n.forms[0]) == value(n.forms[1]) ? 1L : 0L);
-            case node_kind::triangle: return triangle_holds(n) ? exact::number(1L) : exact::number();
-            case node_kind::sum: return sum(n);
-            default: return coupling_symbol(n);
-        }
+    exact::number variable(int slot) const { return exact::number(value_[slot]); }
+
+    bool phase_is_odd(const linear& f) const {
+        cln::cl_RA x = value(f);
+        if (!is_integer(x))
+            throw evaluation_error("the exponent of (-1)^(" + f.text + ") is " + show(x) + " here, not an integer");
+        return cln::oddp(cln::the<cln::cl_I>(x));
     }
 
-private:
+    bool equal(const linear& a, const linear& b) const { return value(a) == value(b); }
+
     cln::cl_RA value(const linear& f) const {
         cln::cl_RA v = f.constant;
         for (const auto& [s, c] : f.terms) v = v + c * value_[s];
@@ -96,26 +71,6 @@ private:
             throw evaluation_error("'" + f.text + "' = " + show(value(f)) + " is too large (2j may be at most " +
                                    std::to_string(limits_.max_twice_j) + ")");
         return cln::cl_I_to_long(i);
-    }
-
-    bool triangle_holds(const node& n) const {
-        auto a = twice(n.forms[0]), b = twice(n.forms[1]), c = twice(n.forms[2]);
-        return a && b && c && exact::triangle(*a, *b, *c);
-    }
-
-    exact::number coupling_symbol(const node& n) {
-        long t[9];
-        for (std::size_t k = 0; k < n.forms.size(); ++k) {
-            auto v = twice(n.forms[k]);
-            if (!v) return exact::number();  // not a quantum number: the symbol vanishes
-            t[k] = *v;
-        }
-        switch (n.kind) {
-            case node_kind::threej: return exact::threej(t[0], t[1], t[2], t[3], t[4], t[5]);
-            case node_kind::clebsch: return exact::clebsch_gordan(t[0], t[1], t[2], t[3], t[4], t[5]);
-            case node_kind::sixj: return exact::sixj(t[0], t[1], t[2], t[3], t[4], t[5]);
-            default: return exact::ninej(t[0], t[1], t[2], t[3], t[4], t[5], t[6], t[7], t[8]);
-        }
     }
 
     exact::number sum(const node& n) {
@@ -184,6 +139,7 @@ private:
             if (++evaluations_ > limits_.max_sum_terms)
                 throw evaluation_error("the sums need more than " + std::to_string(limits_.max_sum_terms) +
                                        " terms at this point");
+            if (evaluations_ % 64 == 0) check_deadline();  // --time-limit reaches into long sums
             return run(*s.body);
         }
         // Enumerate next the index with the narrowest finite range.
@@ -241,7 +197,7 @@ compiled_expression::compiled_expression(compiled_expression&&) noexcept = defau
 compiled_expression& compiled_expression::operator=(compiled_expression&&) noexcept = default;
 
 exact::number compiled_expression::at(const assignment& values) const {
-    machine m(*program_, limits_);
+    std::vector<std::pair<int, cln::cl_RA>> given;
     std::vector<std::string> missing;
     for (int slot : program_->free_slots) {
         const std::string& name = program_->slot_names[slot];
@@ -251,7 +207,7 @@ exact::number compiled_expression::at(const assignment& values) const {
             missing.push_back(name);
             continue;
         }
-        m.assign(slot, cln::the<cln::cl_RA>(it->second.to_cl_N()));
+        given.emplace_back(slot, cln::the<cln::cl_RA>(it->second.to_cl_N()));
     }
     if (!missing.empty()) {
         std::string list;
@@ -259,6 +215,10 @@ exact::number compiled_expression::at(const assignment& values) const {
         throw evaluation_error("no value given for " + list + " (write: eval EXPR at " + missing.front() +
                                "=...)");
     }
+    if (limits_.enumeration == sum_enumeration::propagating)
+        if (auto v = eval_detail::run_propagating(*program_, limits_, given)) return *v;
+    machine m(*program_, limits_);
+    for (const auto& [slot, v] : given) m.assign(slot, v);
     return m.run(*program_->root);
 }
 

@@ -24,9 +24,19 @@ public:
     using std::runtime_error::runtime_error;
 };
 
+// How a sum's indices are enumerated.  Both give the same exact value.  `propagating` binds
+// the indices in an order fixed at compile time, solves an index from an equality (m3 = -m1 - m2
+// of a 3j) instead of looping over it, checks each selection rule and evaluates each factor
+// as soon as its slots are bound, and remembers coupling-symbol values between calls; it works
+// on doubled values in machine integers and falls back to `intervals` when a value is not a
+// multiple of 1/2.  `intervals` loops over every index in turn, the narrowest range first,
+// with rational arithmetic: the plain reference.
+enum class sum_enumeration { propagating, intervals };
+
 struct evaluation_limits {
     long max_twice_j = 20000;           // 2j of any coupling-symbol entry
     long max_sum_terms = 10'000'000;    // summand evaluations in one call
+    sum_enumeration enumeration = sum_enumeration::propagating;
 };
 
 namespace eval_detail {

@@ -1,0 +1,87 @@
+// The part of evaluating a compiled node that does not depend on how values are held: the
+// arithmetic, and coupling symbols from their doubled arguments.  `Values` (CRTP) supplies a
+// form's doubled value, phases, deltas, variables and sums.
+#pragma once
+
+#include <optional>
+
+#include "couplet/eval/evaluate.hpp"
+#include "couplet/exact/admissibility.hpp"
+#include "couplet/exact/wigner.hpp"
+#include "eval/compiled.hpp"
+
+namespace couplet::eval_detail {
+
+template <typename Values>
+class node_runner {
+public:
+    exact::number run(const node& n) {
+        switch (n.kind) {
+            case node_kind::constant: return n.value;
+            case node_kind::variable: return self().variable(n.slot);
+            case node_kind::add: {
+                exact::number s;
+                for (const auto& c : n.children) s += run(*c);
+                return s;
+            }
+            case node_kind::mul: {
+                exact::number s(1L);
+                for (const auto& c : n.children) {
+                    s *= run(*c);
+                    if (s.is_zero()) break;
+                }
+                return s;
+            }
+            case node_kind::power: return exact::power(run(*n.children[0]), n.exponent);
+            case node_kind::root_power: {
+                exact::number base = run(*n.children[0]);
+                if (!base.is_rational() || cln::minusp(base.rational_value()))
+                    throw evaluation_error("sqrt of " + base.to_string() + " (in " + n.text +
+                                           ") is not a real square root of a rational");
+                return exact::power(exact::number::sqrt_of(base.rational_value()), n.exponent);
+            }
+            case node_kind::phase: return exact::number(self().phase_is_odd(n.forms[0]) ? -1L : 1L);
+            case node_kind::delta: return exact::number(self().equal(n.forms[0], n.forms[1]) ? 1L : 0L);
+            case node_kind::triangle: {
+                auto a = self().twice(n.forms[0]), b = self().twice(n.forms[1]), c = self().twice(n.forms[2]);
+                return a && b && c && exact::triangle(*a, *b, *c) ? exact::number(1L) : exact::number();
+            }
+            case node_kind::sum: return self().sum(n);
+            default: return coupling_symbol(n);
+        }
+    }
+
+protected:
+    explicit node_runner(symbol_memo* memo) : memo_(memo) {}
+
+private:
+    Values& self() { return static_cast<Values&>(*this); }
+
+    exact::number coupling_symbol(const node& n) {
+        symbol_memo::key t{};
+        t[9] = static_cast<long>(n.kind);
+        for (std::size_t k = 0; k < n.forms.size(); ++k) {
+            auto v = self().twice(n.forms[k]);
+            if (!v) return exact::number();  // not a quantum number: the symbol vanishes
+            t[k] = *v;
+        }
+        if (!memo_) return compute(n.kind, t);
+        auto it = memo_->values.find(t);
+        if (it != memo_->values.end()) return it->second;
+        if (memo_->values.size() >= symbol_memo::capacity) memo_->values.clear();
+        return memo_->values.emplace(t, compute(n.kind, t)).first->second;
+    }
+
+    static exact::number compute(node_kind kind, const symbol_memo::key& t) {
+        switch (kind) {
+            case node_kind::threej: return exact::threej(t[0], t[1], t[2], t[3], t[4], t[5]);
+            case node_kind::clebsch: return exact::clebsch_gordan(t[0], t[1], t[2], t[3], t[4], t[5]);
+            case node_kind::sixj: return exact::sixj(t[0], t[1], t[2], t[3], t[4], t[5]);
+            default: return exact::ninej(t[0], t[1], t[2], t[3], t[4], t[5], t[6], t[7], t[8]);
+        }
+    }
+
+    symbol_memo* memo_;
+};
+
+}  // namespace couplet::eval_detail
