@@ -8,10 +8,12 @@
 
 #include "couplet/model/fresh_index.hpp"
 #include "couplet/model/normalize.hpp"
+#include "couplet/run_limits.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/print/print.hpp"
 #include "couplet/symmetry/symmetries.hpp"
 #include "rules/matcher.hpp"
+#include "rules/roots.hpp"
 #include "rules/structure.hpp"
 #include "simplify/phase_reduction.hpp"
 
@@ -83,11 +85,14 @@ public:
     explicit engine(const quantum_numbers& numbers) : numbers_(numbers) {}
 
     ex run(const ex& e) {
-        ex x = e;
+        // Roots split before every step: a rule's result or a substitution can leave
+        // sqrt((2p+1)(2p+1)) or sqrt(2y+1)^2 behind.
+        ex x = split_roots(e, numbers_);
         for (int step = 0; step < step_limit; ++step) {
+            check_deadline();
             std::optional<ex> next = step_on_sum(x);
             if (!next) break;
-            x = *next;
+            x = split_roots(*next, numbers_);
         }
         return x;
     }
@@ -113,13 +118,16 @@ private:
         return std::nullopt;
     }
 
-    // Expansion may have spread one summand over several sums over the same indices
-    // (sum(x : S) + sum(x : 2x S)); together they may be a rule's left side again.
+    // Expansion may have spread one summand over several sums (sum(x : S) + sum(x : 2x S)),
+    // possibly under different index names (sum(x : S) + sum(y : 2y S)); together, with the
+    // indices renamed to agree, they may be a rule's left side again.
     std::optional<ex> merge_sums(const std::vector<ex>& terms) {
         struct group {
             lst indices;
+            ex structure;  // of the first member's summand, to align the others' index names
             std::vector<size_t> members;
             ex body = 0;
+            bool renamed = false;
         };
         std::vector<group> groups;
         for (size_t k = 0; k < terms.size(); ++k) {
@@ -134,14 +142,18 @@ private:
             bool captures = std::any_of(s.indices().begin(), s.indices().end(),
                                         [&](const ex& i) { return outside.has(i); });
             if (captures) continue;
-            auto g = std::find_if(groups.begin(), groups.end(),
-                                  [&](const group& x) { return x.indices.is_equal(s.indices()); });
-            if (g == groups.end()) {
-                groups.push_back({s.indices(), {}, 0});
-                g = groups.end() - 1;
+            bool joined = false;
+            for (group& g : groups) {
+                if (g.indices.nops() != s.indices().nops()) continue;
+                auto body = renamed_into(terms[k], s, g.indices, g.structure);
+                if (!body) continue;
+                g.members.push_back(k);
+                g.body += outside * *body;
+                g.renamed = g.renamed || !s.indices().is_equal(g.indices);
+                joined = true;
+                break;
             }
-            g->members.push_back(k);
-            g->body += outside * s.body();
+            if (!joined) groups.push_back({s.indices(), summand_structure(s.body()), {k}, outside * s.body(), false});
         }
         for (const group& g : groups) {
             if (g.members.size() < 2) continue;
@@ -152,10 +164,39 @@ private:
             ex rest = 0, before = 0;
             for (size_t k = 0; k < terms.size(); ++k)
                 (std::count(g.members.begin(), g.members.end(), k) ? before : rest) += terms[k];
+            std::string name = g.renamed ? "sums merged after renaming their indices" : "sums over the same indices merged";
             trace.insert(trace.begin() + static_cast<long>(before_merge),
-                         rule_step{"sums over the same indices merged", "common practice, no source", before, merged});
+                         rule_step{name, "common practice, no source", before, merged});
             return rest + *rewritten;
         }
+        return std::nullopt;
+    }
+
+    // The coupling structure of a summand (its first term without the polynomial factors).
+    static ex summand_structure(const ex& body) {
+        ex structure = 1;
+        for (const ex& f : factors_of(terms_of(body.expand()).front()))
+            if (!is_polynomial_factor(f)) structure *= f;
+        return structure;
+    }
+
+    // The summand of s with its indices renamed to `target`, in an order that captures no name
+    // of `term` and gives the summand `structure` (only like structures can collect into a
+    // rule's summand); under the same names as they are.
+    static std::optional<ex> renamed_into(const ex& term, const index_sum& s, const lst& target, const ex& structure) {
+        if (s.indices().is_equal(target)) return s.body();
+        std::vector<ex> own(s.indices().begin(), s.indices().end());
+        for (const ex& t : target)
+            if (term.has(t) && std::none_of(own.begin(), own.end(), [&](const ex& i) { return i.is_equal(t); }))
+                return std::nullopt;
+        std::vector<size_t> order(own.size());
+        for (size_t i = 0; i < order.size(); ++i) order[i] = i;
+        do {
+            exmap rename;
+            for (size_t i = 0; i < order.size(); ++i) rename[own[order[i]]] = target.op(i);
+            ex body = s.body().subs(rename);
+            if (summand_structure(body).is_equal(structure)) return body;
+        } while (std::next_permutation(order.begin(), order.end()));
         return std::nullopt;
     }
 
@@ -428,7 +469,7 @@ jsum_result reduce_jsums(const ex& e, const quantum_numbers& numbers) {
         x = reduce_phases(x, numbers);
         x = merge_phases(x);
     }
-    return {x, std::move(en.trace)};
+    return {join_roots(x), std::move(en.trace)};
 }
 
 }  // namespace couplet::rules

@@ -2,6 +2,7 @@
 
 #include "simplify/phase_reduction.hpp"
 
+#include <algorithm>
 #include <set>
 #include <stdexcept>
 
@@ -41,9 +42,33 @@ std::vector<triad> all_triads(const ex& e) {
     return out;
 }
 
+namespace {
+
+bool has_compound_entry(const ex& s) {
+    for (const ex& entry : s)
+        if (!is_a<symbol>(entry) && !is_a<numeric>(entry)) return true;
+    return false;
+}
+
+// The 144 arrangements: the classical 24 closed under Regge's symmetry (DLMF 34.5.9).  A
+// Regge image of a 6j with plain entries has half-sums for entries, so only such a 6j can be
+// one; for plain entries the images add nothing a pattern of plain symbols could meet.
+std::vector<symmetry::transformed> sixj_regge_orbit(const ex& s) {
+    std::vector<symmetry::transformed> out{{s, 0}};
+    for (size_t k = 0; k < out.size(); ++k)
+        for (const auto& g : symmetry::sixj_symmetries()) {
+            ex image = g.apply(out[k].symbol).symbol;
+            auto known = std::find_if(out.begin(), out.end(), [&](const auto& t) { return t.symbol.is_equal(image); });
+            if (known == out.end()) out.push_back({image, 0});  // no 6j symmetry costs a phase
+        }
+    return out;
+}
+
+}  // namespace
+
 std::vector<symmetry::transformed> arrangements(const ex& s) {
     switch (kind_of(s)) {
-        case symbol_kind::sixj: return symmetry::sixj_orbit(s);
+        case symbol_kind::sixj: return has_compound_entry(s) ? sixj_regge_orbit(s) : symmetry::sixj_orbit(s);
         case symbol_kind::ninej: return symmetry::ninej_orbit(s);
         case symbol_kind::triangle: {
             // tri(a, b, c) is symmetric in its three arguments.

@@ -21,7 +21,8 @@ std::vector<triad> triads_of(const GiNaC::ex& symbol);
 // Triads of every symbol anywhere in e (inside products, powers and sums).
 std::vector<triad> all_triads(const GiNaC::ex& e);
 
-// The arrangements of a 6j (24), 9j (72) or tri (6, no phase), as symbol == (-1)^phase * arrangement.
+// The arrangements of a 6j (24; 144 with Regge's when an entry is a compound linear form), 9j (72)
+// or tri (6, no phase), as symbol == (-1)^phase * arrangement.
 std::vector<symmetry::transformed> arrangements(const GiNaC::ex& symbol);
 
 // Terms of a sum (a single term is a sum of one).

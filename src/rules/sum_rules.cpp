@@ -118,11 +118,28 @@ sum_rule ninej_orthogonality() {
     return s.r;
 }
 
+sum_rule ninej_sum_rule() {
+    builder s;
+    s.r.name = "9j sum rule";
+    s.r.reference = "DLMF 34.7.3";
+    // DLMF's j1 j2 j12 j3 j4 j34 j13 j24 j j14 j23 as a b c e g d x y j h f.
+    auto x = s("x"), y = s("y"), a = s("a"), b = s("b"), c = s("c"), d = s("d"), e = s("e");
+    auto f = s("f"), g = s("g"), h = s("h"), j = s("j");
+    s.r.index = x;
+    s.r.second_index = y;
+    s.r.phase = 2 * b + y + f - d;
+    s.r.factors = {wigner9j(a, b, c, e, g, d, x, y, j).hold(), wigner9j(a, e, x, g, b, y, h, f, j).hold()};
+    // Every triad of the left side that survives the sum is one of the result's.
+    s.r.result = wigner9j(a, b, c, g, e, d, h, f, j).hold();
+    return s.r;
+}
+
 }  // namespace
 
 const std::vector<sum_rule>& sum_rules() {
     static const std::vector<sum_rule> all{orthogonality(),         racah_sum(),          biedenharn_elliott(),
-                                           ninej_from_three_sixj(), triangle_dimension(), ninej_orthogonality()};
+                                           ninej_from_three_sixj(), triangle_dimension(), ninej_orthogonality(),
+                                           ninej_sum_rule()};
     return all;
 }
 

@@ -6,56 +6,13 @@
 
 #include "couplet/rules/engine.hpp"
 #include "couplet/simplify.hpp"
-#include "jsum_check.hpp"
+#include "cli_simplify.hpp"
 #include "support.hpp"
 
 using namespace couplet;
-
-namespace {
-
-int count_of(const std::string& text, const std::string& word) {
-    int n = 0;
-    for (size_t at = text.find(word); at != std::string::npos; at = text.find(word, at + 1)) ++n;
-    return n;
-}
-
-std::string trimmed(std::string s) {
-    while (!s.empty() && (s.back() == '\n' || s.back() == ' ')) s.pop_back();
-    return s;
-}
-
-struct simplified {
-    std::string text;
-    testing::sample_report report;
-};
-
-// Runs the command line on `declarations` + `input` and compares input and output exactly.
-// `verify` off for inputs whose single phase factors are no integers where a triangle fails: the
-// command line's own check refuses to evaluate those; this test compares exactly instead.
-simplified simplify_and_compare(const std::string& declarations, const std::string& input, bool verify = true,
-                                int points = 120) {
-    std::vector<std::string> args{"simplify", "-e", declarations + input};
-    if (!verify) args.push_back("--no-verify");
-    auto r = testing::run_cli(args);
-    INFO("stderr: " << r.err);
-    REQUIRE(r.code == 0);
-    std::string out = trimmed(r.out);
-    auto both = testing::lower_text(declarations + input + "\n" + out);
-    const auto& statements = both.statements;
-    REQUIRE(statements.size() >= 2);
-    auto report = testing::compare_at_points(statements[statements.size() - 2].value, statements.back().value,
-                                             both.numbers, 11, points);
-    return {out, report};
-}
-
-void require_exact(const simplified& s) {
-    INFO("output: " << s.text << "\nfirst mismatch: " << s.report.first_mismatch);
-    CHECK(s.report.mismatches == 0);
-    CHECK(s.report.compared >= 100);
-    CHECK(s.report.nonzero >= 10);
-}
-
-}  // namespace
+using couplet::testing::count_of;
+using couplet::testing::require_exact;
+using couplet::testing::simplify_and_compare;
 
 TEST_CASE("6j orthogonality in disguise gives delta/(2p+1) with the triangles of p", "[rules][cli]") {
     // DLMF 34.5.14; columns permuted, upper and lower swapped, index y, extra (-1)^(4y).
@@ -219,4 +176,70 @@ TEST_CASE("the trace records each applied rule with its reference", "[rules]") {
     CHECK(has_orthogonality(rules::reduce_jsums(e, program.numbers).trace));
     simplify_expression(e, program.numbers);
     CHECK(has_orthogonality(last_jsum_trace()));
+}
+
+TEST_CASE("delta elimination in disguise: the later name goes everywhere", "[rules][cli]") {
+    // Common practice, no source: delta(q, p) f(q) = delta(q, p) f(p); the delta written with
+    // its arguments reversed and the 6j with its columns permuted.
+    // Many points: the delta holds at few of them.
+    auto s = simplify_and_compare("", "delta(q, p) * 6j{q, b, a; d, c, e} * (2*q+1)", true, 600);
+    require_exact(s);
+    INFO(s.text);
+    CHECK(count_of(s.text, "delta(") >= 1);
+    CHECK(count_of(s.text, "q") == count_of(s.text, "delta("));  // q only inside the deltas
+}
+
+TEST_CASE("chain over two indices: Biedenharn-Elliott over v, then orthogonality over w", "[rules][cli]") {
+    // DLMF 34.5.16-34.5.17 with b = a, c = d, f = e, so that its two 6j are one 6j squared, then
+    // DLMF 34.5.14 over w = p.  Every 6j rearranged, the phase split and padded with (-1)^(4v).
+    auto s = simplify_and_compare("",
+                                  "sum(w, v : (-1)^(2*a+2*d+w) * (2*v+1) * 6j{w, d, a; v, a, d}"
+                                  " * (-1)^(2*e+q+r+v+4*v) * 6j{d, v, d; e, q, e} * (2*w+1) * 6j{a, v, a; e, r, e})",
+                                  false);
+    require_exact(s);
+    INFO(s.text);
+    CHECK(count_of(s.text, "sum(") == 0);
+    CHECK(count_of(s.text, "6j") == 0);
+    CHECK(count_of(s.text, "tri(") == 2);
+    std::string applied = couplet::testing::rules_applied(
+        "sum(w, v : (-1)^(2*a+2*d+w) * (2*v+1) * 6j{w, d, a; v, a, d}"
+        " * (-1)^(2*e+q+r+v+4*v) * 6j{d, v, d; e, q, e} * (2*w+1) * 6j{a, v, a; e, r, e})");
+    INFO(applied);
+    CHECK(applied.find("Biedenharn-Elliott identity\n") < applied.find("6j orthogonality\n"));
+    CHECK(count_of(applied, "6j orthogonality") == 1);
+}
+
+TEST_CASE("chain: a transposed 9j expanded, with a rearranged 6j and (-1)^(4k)", "[rules][cli]") {
+    // As the chain above (DLMF 34.6.2 backwards, DLMF 34.5.16-34.5.17, DLMF 34.5.14), the 9j
+    // transposed (no phase), the 6j with two columns exchanged and flipped, the index k.
+    auto s = simplify_and_compare("",
+                                  "sum(k : (-1)^(4*k) * (2*k+1) * 9j{a, d, g; b, e, h; c, f, k}"
+                                  " * 6j{h, g, k; f, c, r})");
+    require_exact(s);
+    INFO(s.text);
+    CHECK(count_of(s.text, "sum(") == 0);
+    CHECK(count_of(s.text, "9j") == 0);
+    CHECK(count_of(s.text, "6j") == 2);
+}
+
+TEST_CASE("chain: a 9j summed over a corner is expanded, then the Racah sum rule and orthogonality", "[rules][cli]") {
+    // 9j{z a b; b c d; a e f} with its corner z summed: DLMF 34.6.2 backwards (z then stands in
+    // two of the three 6j), DLMF 34.5.15 over z, DLMF 34.5.14 over the expansion's index.  The 9j
+    // transposed, the phase (-1)^(z+a+b) split and padded with (-1)^(4z).
+    auto s = simplify_and_compare("", "sum(z : (-1)^(z+a) * (2*z+1) * (-1)^(b+4*z) * 9j{z, b, a; a, c, e; b, d, f})",
+                                  false, 150);
+    INFO(s.text << "\n" << s.report.first_mismatch);
+    CHECK(s.report.mismatches == 0);
+    CHECK(s.report.compared >= 150);
+    CHECK(s.report.nonzero >= 5);
+    CHECK(count_of(s.text, "sum(") == 0);
+    CHECK(count_of(s.text, "9j") == 0);
+    CHECK(count_of(s.text, "6j") == 0);
+    CHECK(count_of(s.text, "delta(") == 1);
+    std::string applied = couplet::testing::rules_applied(
+        "sum(z : (-1)^(z+a) * (2*z+1) * (-1)^(b+4*z) * 9j{z, b, a; a, c, e; b, d, f})");
+    INFO(applied);
+    CHECK(count_of(applied, "9j expanded as a sum of three 6j") == 1);
+    CHECK(count_of(applied, "Racah sum rule") == 1);
+    CHECK(count_of(applied, "6j orthogonality") == 1);
 }

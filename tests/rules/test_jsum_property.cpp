@@ -42,8 +42,11 @@ struct random_case {
     }
 
     GiNaC::ex from_rule() {
-        const auto& all = rules::sum_rules();
-        const rules::sum_rule& r = all[pick(static_cast<int>(all.size()) - 1)];  // the 6j rules
+        // The single sums (their factors are 6j or tri): the double sums are rules on 9j.
+        std::vector<const rules::sum_rule*> sixj_rules;
+        for (const rules::sum_rule& r : rules::sum_rules())
+            if (!r.second_index) sixj_rules.push_back(&r);
+        const rules::sum_rule& r = *sixj_rules[pick(static_cast<int>(sixj_rules.size()))];
         GiNaC::exmap rename;
         for (const quantum_number& q : r.numbers.all())
             rename[q.symbol] = q.symbol.is_equal(r.index) ? GiNaC::ex(x) : any_symbol();

@@ -21,9 +21,9 @@ const sum_rule& rule_named(const std::string& name) {
 TEST_CASE("each sum rule equals its left side exactly at sampled points", "[rules]") {
     // References beside each rule: 6j orthogonality DLMF 34.5.14, Racah sum rule DLMF 34.5.15,
     // Biedenharn-Elliott DLMF 34.5.16-34.5.17, three 6j -> 9j DLMF 34.6.2, sum of (2x+1) over a
-    // triangle common practice, no source, 9j orthogonality DLMF 34.7.2.  The table holds each
-    // rule's reference string.
-    REQUIRE(sum_rules().size() == 6);
+    // triangle common practice, no source, 9j orthogonality DLMF 34.7.2, the 9j sum rule DLMF
+    // 34.7.3.  The table holds each rule's reference string.
+    REQUIRE(sum_rules().size() == 7);
     for (const sum_rule& r : sum_rules()) {
         INFO(r.name << " (" << r.reference << ")");
         self_test_report report;
@@ -56,4 +56,9 @@ TEST_CASE("the self-test catches a rule with a phase or a triangle missing", "[r
     GiNaC::ex p = loose.numbers.find("p")->symbol, q = loose.numbers.find("q")->symbol;
     loose.result = kdelta(p, q).hold() / (2 * p + 1);
     CHECK_THROWS_AS(self_test(loose, 5), std::logic_error);
+    // The 9j sum rule without the (-1)^(2 j2) of DLMF 34.7.3 differs wherever j2 is half-odd.
+    sum_rule unsigned_sum = rule_named("9j sum rule");
+    GiNaC::ex b = unsigned_sum.numbers.find("b")->symbol;
+    unsigned_sum.phase = (unsigned_sum.phase - 2 * b).expand();
+    CHECK_THROWS_AS(self_test(unsigned_sum, 5), std::logic_error);
 }

@@ -7,12 +7,15 @@
 // together with a sum rule on another index that then fires, which keeps the indices and
 // removes the 9j; the zero-argument rules remove a 6j or a 9j; a vanishing term drops out; delta
 // elimination replaces a symbol by one earlier in the readable order.  Splitting or merging
-// sums is done only together with a rule that fires.  A step limit guards against a bug in
-// that argument.
+// sums (also sums whose indices are renamed to agree) is done only together with a rule that
+// fires.  Roots are split into roots of their factors before each step (idempotent, so no
+// step of its own; rules/roots.hpp) and rejoined at the end.  A step limit guards against a
+// bug in that argument.
 #pragma once
 
 #include <ginac/ginac.h>
 
+#include <string>
 #include <vector>
 
 #include "couplet/model/quantum.hpp"
@@ -34,4 +37,7 @@ namespace couplet {
 // The stage as simplify_expression calls it; the trace of the last call is kept for the CLI.
 GiNaC::ex apply_jsum_rules(const GiNaC::ex& e, const quantum_numbers& numbers);
 const std::vector<rules::rule_step>& last_jsum_trace();
+// Three lines per step: "rule name (reference)", then "  before: ..." and "  after:  ..." in
+// the text notation (to_text).
+std::vector<std::string> format_jsum_trace(const std::vector<rules::rule_step>& trace);
 }  // namespace couplet

@@ -31,7 +31,8 @@ struct sum_rule {
 };
 
 // 6j orthogonality, Racah sum rule, Biedenharn-Elliott, three 6j -> 9j, sum of (2x+1) over a
-// triangle, 9j orthogonality (the double sum last).  Built once (function-local static: GiNaC functions must be registered first).
+// triangle, 9j orthogonality, the 9j sum rule (the double sums last).  Built once
+// (function-local static: GiNaC functions must be registered first).
 const std::vector<sum_rule>& sum_rules();
 
 // A rule on one symbol, wherever it stands: the pattern (a 6j or 9j in pattern symbols with
