@@ -6,8 +6,11 @@
 #include <ginac/ginac.h>
 
 #include <stdexcept>
+#include <string>
+#include <vector>
 
 #include "couplet/model/quantum.hpp"
+#include "couplet/rules/rule.hpp"
 
 namespace couplet {
 
@@ -18,6 +21,14 @@ public:
     using std::runtime_error::runtime_error;
 };
 
+// One applied rule or network move (name, reference, before, after); a network move records
+// the whole expression before and after the m-sum stage.  format_jsum_trace prints them.
+using simplification_step = rules::rule_step;
+
 GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers);
+
+// The steps of the last simplify_expression call on this thread, in order, for the
+// derivation trace (`simplify --steps`): the network moves, then the j-sum rules.
+const std::vector<simplification_step>& last_simplification_steps();
 
 }  // namespace couplet

@@ -6,6 +6,7 @@
 #include "couplet/eval/evaluate.hpp"
 #include "couplet/exact/number.hpp"
 #include "couplet/print/print.hpp"
+#include "couplet/rules/engine.hpp"
 #include "couplet/simplify.hpp"
 #include "couplet/model/normalize.hpp"
 #include "couplet/symmetry/symmetries.hpp"
@@ -46,6 +47,14 @@ outcome simplify(const lowered_statement& s, const lowered_program& program, con
     json record{{"kind", "simplify"}, {"input", s.text}, {"result", to_text(result)},
                 {"latex", to_latex(result)}, {"input_latex", to_latex(s.value)},
                 {"verified", false}, {"points", 0}};
+    if (options.show_steps) {
+        json steps = json::array();
+        for (const simplification_step& step : last_simplification_steps())
+            steps.push_back({{"rule", step.rule}, {"reference", step.reference}, {"before", to_text(step.before)},
+                             {"after", to_text(step.after)}});
+        record["steps"] = steps;
+        record["steps_text"] = format_jsum_trace(last_simplification_steps());
+    }
     if (!options.verify_simplify) return {record};
     verify::simplification_check v;
     try {
@@ -121,7 +130,9 @@ outcome check(const lowered_statement& s, const lowered_program& program, const 
     }
     record.update(verify::to_json(r));
     record["result"] = verify::summary(r);
-    return {record, r.result != verify::verdict::holds};
+    outcome out{record, r.result != verify::verdict::holds && r.result != verify::verdict::undecided};
+    out.stopped = r.stopped;
+    return out;
 }
 
 }  // namespace

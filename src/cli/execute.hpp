@@ -23,6 +23,7 @@ struct execute_options {
     verify::progress_callback progress;
     verify::simplifier_function simplifier;  // empty: simplify_expression
     bool prefer_clebsch = false;             // print results with CG instead of 3j symbols
+    bool show_steps = false;                 // add the applied moves and rules to simplify's record
 };
 
 struct outcome {
@@ -31,6 +32,8 @@ struct outcome {
     // couplet caught itself in an error (a simplification that changes the value): the
     // record shows the input unchanged and `diagnostic` says what went wrong.
     bool internal_failure = false;
+    // The time limit ended the statement; the record shows what was established before it.
+    bool stopped = false;
     std::string diagnostic = {};
 };
 

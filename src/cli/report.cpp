@@ -10,7 +10,9 @@ void reporter::begin() {
 void reporter::statement(const nlohmann::json& r) {
     const std::string kind = r.at("kind");
     if (format_ == "json") {
-        out_ << r.dump() << "\n";
+        nlohmann::json shown = r;
+        shown.erase("steps_text");  // "steps" carries the same, structured
+        out_ << shown.dump() << "\n";
         return;
     }
     if (format_ == "latex") {
@@ -23,11 +25,20 @@ void reporter::statement(const nlohmann::json& r) {
             out_ << body << "\n";
         if (document_ && kind == "check")
             out_ << "% check: " << r.at("verdict").get<std::string>() << "\n";
+        steps(r, "% ");
         return;
     }
     out_ << r.at("result").get<std::string>();
     if (kind == "eval") out_ << "  ~ " << r.at("decimal").get<std::string>();
     out_ << "\n";
+    steps(r, "#   ");
+}
+
+// As comments, so that text output stays valid input and LaTeX still compiles.
+void reporter::steps(const nlohmann::json& r, const char* comment) {
+    if (!r.contains("steps_text")) return;
+    if (r.at("steps_text").empty()) out_ << comment << "(no move or rule applied)\n";
+    for (const auto& line : r.at("steps_text")) out_ << comment << line.get<std::string>() << "\n";
 }
 
 void reporter::end() {

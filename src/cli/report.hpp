@@ -21,6 +21,7 @@ public:
     void error(const source_file& src, const user_error& e);
 
 private:
+    void steps(const nlohmann::json& record, const char* comment);
     std::string format_;
     bool document_;
     std::ostream& out_;

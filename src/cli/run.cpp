@@ -68,7 +68,7 @@ std::string conventions_text() { return conventions_text_head + bounds_text() + 
 
 struct request {
     std::string command, file, text, format = "text";
-    bool has_text = false, fragment = false, no_verify = false;
+    bool has_text = false, fragment = false, no_verify = false, steps = false;
     int depth = 2, samples = 200;
     std::string prefer = "3j";
     std::size_t max_terms = run_limits{}.max_terms;
@@ -102,9 +102,10 @@ void add_common_options(CLI::App& sub, request& r) {
 }
 
 // The statement's own message when the time limit stops it, saying what is complete.
-std::string stopped_message(double seconds, std::size_t done, std::size_t not_started) {
+std::string stopped_message(double seconds, std::size_t done, std::size_t not_started, bool partial = false) {
     std::ostringstream os;
     os << "stopped: the time limit of " << seconds << " s was reached while working on this statement; ";
+    if (partial) os << "what it established by then is printed; ";
     if (done == 0)
         os << "no statement was finished";
     else
@@ -138,6 +139,9 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
     for (const auto& c : commands) {
         CLI::App* sub = app.add_subcommand(c.name, c.help);
         add_common_options(*sub, r);
+        if (std::string(c.name) == "simplify")
+            sub->add_flag("--steps", r.steps,
+                          "After each result, list the network moves and sum rules applied, with their references");
         if (std::string(c.name) == "latex")
             sub->add_flag("--fragment", r.fragment, "Print only the formulas, without the document around them");
         sub->callback([&r, name = c.name] { r.command = name; });
@@ -198,6 +202,7 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         options.sampling.samples = r.samples;
         options.verify_simplify = !r.no_verify;
         options.prefer_clebsch = r.prefer == "cg";
+        options.show_steps = r.steps;
         options.limit_verification_time = !explicit_sampling;
         // Progress goes to a terminal only: piped or captured stderr stays clean.
         std::optional<verify::terminal_progress> meter;
@@ -227,6 +232,8 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
             }
             if (!o.record.is_null()) rep.statement(o.record);
             if (!o.diagnostic.empty()) err << o.diagnostic;
+            if (o.stopped)
+                throw user_error(s.span.begin, stopped_message(r.time_limit, k, statements.size() - k - 1, true));
             any_failed = any_failed || o.check_failed;
             any_internal = any_internal || o.internal_failure;
         }

@@ -9,19 +9,35 @@
 
 namespace couplet {
 
+namespace {
+thread_local std::vector<simplification_step> steps_taken;
+
+void record_network_steps(const std::vector<network::reduction_step>& moves, const GiNaC::ex& before,
+                          const GiNaC::ex& after) {
+    for (const auto& m : moves) steps_taken.push_back({m.move, m.reference, before, after});
+}
+}  // namespace
+
+const std::vector<simplification_step>& last_simplification_steps() { return steps_taken; }
+
 // Each stage keeps the value at every admissible assignment; the order matters only in that
 // phases are reduced after the symmetries have produced theirs.
 GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers) {
+    steps_taken.clear();
     GiNaC::ex x = normalize(e);
     x = symmetry::canonicalize_symbols(x, numbers);
     check_expansion(x);
     x = merge_phases(x.expand());
     check_deadline();
-    x = network::reduce_msums(x, numbers);
+    std::vector<network::reduction_step> moves;
+    GiNaC::ex before_moves = x;
+    x = network::reduce_msums(x, numbers, &moves);
+    record_network_steps(moves, before_moves, x);
     check_deadline();
     x = reduce_phases(x, numbers);
     check_deadline();
     x = apply_jsum_rules(x, numbers);
+    steps_taken.insert(steps_taken.end(), last_jsum_trace().begin(), last_jsum_trace().end());
     return merge_phases(x);
 }
 

@@ -37,6 +37,9 @@ std::string summary(const check_report& r) {
         case verdict::fails_by_factor:
             return "fails by a factor: holds after multiplying the right side by " + to_text(*r.missing_factor) +
                    "; " + evidence(r);
+        case verdict::undecided:
+            return "undecided: the two sides agree at the " + std::to_string(r.points) + " point" +
+                   (r.points == 1 ? "" : "s") + " checked before the time limit";
         default: {
             std::string out = "fails: " + values_at(*r.counter);
             if (!r.note.empty()) out += "; " + r.note;
@@ -58,7 +61,7 @@ nlohmann::json to_json(const counterexample& c) {
 
 nlohmann::json to_json(const check_report& r) {
     nlohmann::json j;
-    j["holds"] = r.result == verdict::holds;
+    j["holds"] = r.result == verdict::undecided ? nlohmann::json() : nlohmann::json(r.result == verdict::holds);
     j["verdict"] = verdict_name(r.result);
     j["missing_phase"] = r.missing_phase ? nlohmann::json(phase_text(*r.missing_phase)) : nlohmann::json();
     j["missing_factor"] = r.missing_factor ? nlohmann::json(to_text(*r.missing_factor)) : nlohmann::json();
@@ -69,6 +72,7 @@ nlohmann::json to_json(const check_report& r) {
     j["exhaustive"] = r.complete;
     j["counterexample"] = r.result != verdict::holds && r.counter ? to_json(*r.counter) : nlohmann::json();
     j["note"] = r.note.empty() ? nlohmann::json() : nlohmann::json(r.note);
+    j["stopped_by_time_limit"] = r.stopped;
     return j;
 }
 

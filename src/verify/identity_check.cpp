@@ -1,5 +1,7 @@
 #include "couplet/verify/identity_check.hpp"
 
+#include "couplet/run_limits.hpp"
+
 #include <algorithm>
 #include <sstream>
 #include <stdexcept>
@@ -31,6 +33,7 @@ const char* verdict_name(verdict v) {
         case verdict::holds: return "holds";
         case verdict::fails_by_phase: return "fails by a phase";
         case verdict::fails_by_factor: return "fails by a factor";
+        case verdict::undecided: return "undecided";
         default: return "fails";
     }
 }
@@ -53,6 +56,7 @@ public:
     void run(const std::vector<point>& points, const progress_callback& progress) {
         for (std::size_t i = 0; i < points.size(); ++i) {
             if (progress) progress(i, points.size());
+            check_deadline();
             if (!observe(points[i])) break;
         }
         if (progress) progress(points.size(), points.size());
@@ -192,9 +196,21 @@ check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers&
     report.complete = samples.complete;
     tolerant_expression left(lhs, numbers), right(rhs, numbers);
     comparison cmp(d, left, right);
-    cmp.run(samples.points, options.progress);
+    try {
+        cmp.run(samples.points, options.progress);
+    } catch (const time_limit_reached&) {
+        report.stopped = true;  // what was compared so far still stands
+    }
     report.points = cmp.evaluated();
     report.nonzero = cmp.nonzero();
+
+    if (report.stopped) {
+        report.counter = cmp.first_mismatch();
+        report.result = report.counter ? verdict::fails : verdict::undecided;
+        report.note = report.counter ? "the time limit stopped the search for a missing phase or factor"
+                                     : "the time limit was reached before every point was checked";
+        return report;
+    }
 
     if (cmp.all_equal()) {
         if (report.points == 0)

@@ -1,5 +1,7 @@
 #include "couplet/verify/sampler.hpp"
 
+#include "couplet/run_limits.hpp"
+
 #include <algorithm>
 #include <random>
 #include <set>
@@ -96,6 +98,7 @@ private:
     template <typename Leaf>
     bool descend(std::size_t k, point& t, Leaf& leaf, long& nodes, long budget) const {
         if (++nodes > budget) return false;
+        if (nodes % 4096 == 0) check_deadline();
         if (k == size()) return leaf(t);
         for (long x : candidates(k, t)) {
             t[k] = x;
@@ -136,6 +139,7 @@ std::vector<point> random_points(const sampling_domain& domain, std::size_t coun
     std::vector<point> out;
     const std::size_t attempts = 40 * count + 40;
     for (std::size_t a = 0; a < attempts && out.size() < count; ++a) {
+        if (a % 1024 == 0) check_deadline();  // a large --samples must not outlast --time-limit
         point t(domain.numbers.size(), 0);
         // Mostly points where every symbol can be nonzero; now and then any admissible one.
         bool ok = (a % 40 == 39) ? loose.draw(t, rng) : keeping.draw(t, rng);

@@ -6,6 +6,7 @@
 #include <stdexcept>
 
 #include "couplet/eval/evaluate.hpp"
+#include "couplet/run_limits.hpp"
 #include "couplet/verify/domain.hpp"
 #include "couplet/verify/tolerant_evaluation.hpp"
 
@@ -62,6 +63,7 @@ simplification_check verify_simplification(const GiNaC::ex& input, const GiNaC::
     }
     // False once the two disagree.
     auto agree_at = [&](const point& t) {
+        check_deadline();
         assignment at = to_assignment(d, t);
         exact::number x, y;
         try {

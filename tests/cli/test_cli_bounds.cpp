@@ -79,3 +79,20 @@ TEST_CASE("the help states every bound with its value", "[cli][bounds]") {
                              "200 deep", "200 digits", "|n| <= 1000"})
         CHECK(r.out.find(text) != std::string::npos);
 }
+
+// [timing]: drawing the sample must take well under the limit, which a sanitizer build may not do.
+TEST_CASE("--time-limit during check prints what the points established", "[cli][bounds][timing]") {
+    // DLMF 34.5.14 (6j orthogonality), checked at far more points than 1 s allows.
+    const std::string identity =
+        "sum(x : (2*x+1) * 6j{a, b, x; c, d, p} * 6j{c, d, x; a, b, q}) == delta(p, q)*tri(a, d, p)*tri(b, c, p)/(2*p+1)";
+    auto r = run_cli({"check", "--time-limit", "1", "--depth", "3", "--samples", "40000", "--format", "json",
+                      "-e", identity});
+    INFO(r.out << r.err);
+    CHECK(r.code == 2);
+    auto record = nlohmann::json::parse(r.out.substr(0, r.out.find('\n')));
+    CHECK(record.at("verdict") == "undecided");
+    CHECK(record.at("holds").is_null());
+    CHECK(record.at("stopped_by_time_limit") == true);
+    CHECK(record.at("points").get<int>() > 0);
+    CHECK(r.err.find("what it established by then is printed") != std::string::npos);
+}

@@ -26,8 +26,9 @@ struct counterexample {
 
 std::string describe(const counterexample& c);  // "j=1, m=-1/2"
 
-enum class verdict { holds, fails_by_phase, fails_by_factor, fails };
-const char* verdict_name(verdict v);  // "holds", "fails by a phase", "fails by a factor", "fails"
+// undecided: the time limit (--time-limit) stopped the comparison before any mismatch.
+enum class verdict { holds, fails_by_phase, fails_by_factor, fails, undecided };
+const char* verdict_name(verdict v);  // "holds", "fails by a phase", "fails by a factor", "fails", "undecided"
 
 using simplifier_function = std::function<GiNaC::ex(const GiNaC::ex&, const quantum_numbers&)>;
 
@@ -51,6 +52,7 @@ struct check_report {
     std::optional<GiNaC::ex> missing_factor;  // the whole factor the right side lacks
     std::optional<counterexample> counter;    // the smallest point where the sides differ
     std::string note;                         // a hint for a plain failure, or a caveat
+    bool stopped = false;                     // the time limit ended the comparison early
 };
 
 // Throws evaluation_error when a side cannot be evaluated at an admissible point.
