@@ -41,9 +41,7 @@ outcome simplify(const lowered_statement& s, const lowered_program& program, con
     auto started = std::chrono::steady_clock::now();
     ex result = run_simplifier(s.value, program, options);
     verify::verification_budget budget;
-    if (options.limit_verification_time)
-        budget.time = std::max<std::chrono::steady_clock::duration>(std::chrono::steady_clock::now() - started,
-                                                                    std::chrono::milliseconds(5));
+    if (options.limit_verification_time) budget = verify::matching_budget(std::chrono::steady_clock::now() - started);
     json record{{"kind", "simplify"}, {"input", s.text}, {"result", to_text(result)},
                 {"latex", to_latex(result)}, {"input_latex", to_latex(s.value)},
                 {"verified", false}, {"points", 0}};

@@ -18,7 +18,8 @@ struct execute_options {
     verify::sampling_options sampling;
     bool verify_simplify = true;
     // At default settings a simplification's check takes about as long as the simplification
-    // did (at least 5 ms and 12 points); with explicit sampling options it checks every point.
+    // did (at least 12 points: verify::matching_budget); with explicit sampling options it
+    // checks every point.
     bool limit_verification_time = true;
     verify::progress_callback progress;
     verify::simplifier_function simplifier;  // empty: simplify_expression

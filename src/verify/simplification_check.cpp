@@ -43,6 +43,12 @@ std::vector<point> next_batch(const sampling_domain& d, const sampling_options& 
 
 }  // namespace
 
+verification_budget matching_budget(std::chrono::steady_clock::duration simplification_time) {
+    verification_budget b;
+    b.time = std::max<std::chrono::steady_clock::duration>(simplification_time, std::chrono::microseconds(1));
+    return b;
+}
+
 simplification_check verify_simplification(const GiNaC::ex& input, const GiNaC::ex& result,
                                            const quantum_numbers& numbers, const sampling_options& options,
                                            const progress_callback& progress, const verification_budget& budget) {

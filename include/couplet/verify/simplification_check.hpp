@@ -23,6 +23,10 @@ struct verification_budget {
     std::size_t min_points = 12;
 };
 
+// simplify's policy at default settings: check fresh points for as long as the simplification
+// took (so verification at most doubles the work), and never fewer than min_points.
+verification_budget matching_budget(std::chrono::steady_clock::duration simplification_time);
+
 struct simplification_check {
     bool agrees = true;
     // Points checked where the input is defined (no division by 0), and of which nonzero.
