@@ -12,7 +12,13 @@ using namespace GiNaC;
 
 namespace {
 
-bool same(const ex& a, const ex& b) { return a.is_equal(b) || (a - b).expand().is_zero(); }
+bool same(const ex& a, const ex& b) {
+    if (a.is_equal(b)) return true;
+    // Two different names, or a name and a number, never agree; only sums need expanding.
+    bool atom_a = is_a<symbol>(a) || is_a<numeric>(a), atom_b = is_a<symbol>(b) || is_a<numeric>(b);
+    if (atom_a && atom_b) return false;
+    return (a - b).expand().is_zero();
+}
 
 bool in_list(const ex& x, const lst& l) {
     for (const ex& y : l)
@@ -28,8 +34,24 @@ std::pair<symbol, int> pattern_entry(const ex& e) {
 
 class matcher {
 public:
-    matcher(const move& m, const msum_term& t, const result_check& accept) : move_(m), term_(t), accept_(accept) {
-        for (const ex& s : t.threejs) orbits_.push_back(symmetry::threej_orbit(s));
+    matcher(const move& m, const msum_term& t, const move_options& options)
+        : move_(m), term_(t), accept_(options.accept), options_(options) {
+        orbits_.resize(t.threejs.size());  // filled when a vertex is first tried
+        // Per term vertex: the summed projections it holds.  Per pattern vertex: how many
+        // summed slots it has, which its image must at least match.
+        for (const ex& s : t.threejs) {
+            std::vector<ex> held;
+            for (int c = 3; c < 6; ++c) {
+                ex b = is_a<symbol>(s.op(c)) ? s.op(c) : (-s.op(c)).expand();
+                if (in_list(b, t.summed)) held.push_back(b);
+            }
+            lines_at_.push_back(held);
+        }
+        for (const ex& p : m.threejs) {
+            std::size_t n = 0;
+            for (int c = 3; c < 6; ++c) n += in_list(pattern_entry(p.op(c)).first, m.summed);
+            summed_slots_.push_back(n);
+        }
         used_.assign(t.threejs.size(), false);
         chosen_.assign(m.threejs.size(), {-1, -1});
     }
@@ -45,8 +67,11 @@ private:
         if (++visits_ > max_visits || vetoes_ >= max_vetoes) return std::nullopt;
         if (k == move_.threejs.size()) return finish(binding);
         for (std::size_t v = 0; v < term_.threejs.size(); ++v) {
-            if (used_[v] || !holds_bound_lines(move_.threejs[k], term_.threejs[v], binding)) continue;
+            if (used_[v] || lines_at_[v].size() < summed_slots_[k] ||
+                !holds_bound_lines(move_.threejs[k], lines_at_[v], binding))
+                continue;
             used_[v] = true;
+            if (orbits_[v].empty()) orbits_[v] = symmetry::threej_orbit(term_.threejs[v]);
             for (std::size_t o = 0; o < orbits_[v].size(); ++o) {
                 exmap b = binding;
                 if (!unify(move_.threejs[k], orbits_[v][o].symbol, b)) continue;
@@ -59,14 +84,16 @@ private:
     }
 
     // A pattern line already placed must run through the candidate vertex too.
-    bool holds_bound_lines(const ex& pattern, const ex& candidate, const exmap& b) const {
+    bool holds_bound_lines(const ex& pattern, const std::vector<ex>& candidate_lines, const exmap& b) const {
         for (int c = 3; c < 6; ++c) {
             symbol p = pattern_entry(pattern.op(c)).first;
             if (!in_list(p, move_.summed)) continue;
             auto it = b.find(p);
             if (it == b.end()) continue;
             ex bare = is_a<symbol>(it->second) ? it->second : (-it->second).expand();
-            if (!candidate.has(bare)) return false;
+            bool held = false;
+            for (const ex& l : candidate_lines) held = held || l.is_equal(bare);
+            if (!held) return false;
         }
         return true;
     }
@@ -96,7 +123,8 @@ private:
         return true;
     }
 
-    std::optional<ex> finish(const exmap& b) {
+    std::optional<ex> finish(exmap b) {
+        if (options_.where && !options_.where(b)) return std::nullopt;
         lst eliminated;
         for (const ex& p : move_.summed) {
             ex v = b.at(p);
@@ -112,6 +140,8 @@ private:
         auto residue = free_of(exponent, eliminated, used_vertices);
         if (!residue) return std::nullopt;
 
+        lst introduced_projections;
+        if (!bind_introduced(b, introduced_projections)) return std::nullopt;
         ex body = term_.rest * make_phase(*residue) * move_.result.subs(b);
         std::vector<bool> matched(term_.threejs.size(), false);
         for (const auto& [v, o] : chosen_) matched[v] = true;
@@ -128,12 +158,31 @@ private:
         lst remaining;
         for (const ex& i : term_.summed)
             if (!in_list(i, eliminated)) remaining.append(i);
+        for (const ex& i : introduced_projections) remaining.append(i);
         auto out = close_sum(body, remaining);
+        if (out && move_.introduced_angular.nops() > 0) {
+            lst outer;
+            for (const ex& x : move_.introduced_angular) outer.append(b.at(x));
+            out = make_sum(*out, outer);
+        }
         if (out && accept_ && !accept_(*out)) {
             ++vetoes_;
             return std::nullopt;
         }
         return out;
+    }
+
+    // The caller's fresh names for the symbols the result introduces.
+    bool bind_introduced(exmap& b, lst& projections) const {
+        std::size_t k = 0;
+        for (const lst* l : {&move_.introduced_angular, &move_.introduced_projections})
+            for (const ex& p : *l) {
+                if (k == options_.fresh.size()) return false;
+                b[p] = options_.fresh[k];
+                if (l == &move_.introduced_projections) projections.append(options_.fresh[k]);
+                ++k;
+            }
+        return true;
     }
 
     // The exponent rewritten free of the eliminated projections, if the vertex rules allow.
@@ -307,20 +356,29 @@ private:
     const move& move_;
     const msum_term& term_;
     const result_check& accept_;
+    const move_options& options_;
     std::vector<std::vector<symmetry::transformed>> orbits_;
+    std::vector<std::vector<ex>> lines_at_;
+    std::vector<std::size_t> summed_slots_;
     std::vector<bool> used_;
     std::vector<std::pair<int, int>> chosen_;
     long visits_ = 0;
     int vetoes_ = 0;
     // The search is bounded: a vetoed result is usually vetoed in every arrangement.
-    static constexpr long max_visits = 20000;
+    static constexpr long max_visits = 5000;
     static constexpr int max_vetoes = 3;
 };
 
 }  // namespace
 
 std::optional<ex> apply_move(const move& m, const msum_term& term, const result_check& accept) {
-    return matcher(m, term, accept).run();
+    move_options options;
+    options.accept = accept;
+    return matcher(m, term, options).run();
+}
+
+std::optional<ex> apply_move(const move& m, const msum_term& term, const move_options& options) {
+    return matcher(m, term, options).run();
 }
 
 }  // namespace couplet::network

@@ -56,11 +56,11 @@ std::vector<move> build() {
                 if (c < 2) first_two_columns.append(m[r][c]);
             }
         out.push_back({"six_threej_to_ninej", "DLMF 34.6.1",
-                       {row(0), column(0), row(1), column(1), row(2), column(2)}, 0, all, ninej});
+                       {row(0), column(0), row(1), column(1), row(2), column(2)}, 0, all, ninej, lst{}, lst{}});
         // One column left open: by the Wigner-Eckart theorem the 3j of that column times the 9j.
         out.push_back({"five_threej_to_threej_ninej", "DLMF 34.6.1 with 34.3.16",
                        {row(0), column(0), row(1), column(1), row(2)}, 0, first_two_columns,
-                       column(2) * ninej});
+                       column(2) * ninej, lst{}, lst{}});
     }
 
     // The 6j as a closed network of four 3j.
@@ -69,7 +69,7 @@ std::vector<move> build() {
                     wigner3j(l1, j2, l3, -u1, m2, u3), wigner3j(l1, l2, j3, u1, -u2, m3)},
                    l1 + l2 + l3 + u1 + u2 + u3,
                    lst{m1, m2, m3, u1, u2, u3},
-                   wigner6j(j1, j2, j3, l1, l2, l3)});
+                   wigner6j(j1, j2, j3, l1, l2, l3), lst{}, lst{}});
 
     // A triangle with one free line at each corner: the Wigner-Eckart form 3j x 6j.
     out.push_back({"triangle_to_threej_sixj", "DLMF 34.5.23",
@@ -77,14 +77,14 @@ std::vector<move> build() {
                     wigner3j(l1, l2, j3, u1, -u2, m3)},
                    l1 + l2 + l3 + u1 + u2 + u3,
                    lst{u1, u2, u3},
-                   wigner3j(j1, j2, j3, m1, m2, m3) * wigner6j(j1, j2, j3, l1, l2, l3)});
+                   wigner3j(j1, j2, j3, m1, m2, m3) * wigner6j(j1, j2, j3, l1, l2, l3), lst{}, lst{}});
 
     // Two vertices joined by two lines: 3j orthogonality.
     out.push_back({"bubble_orthogonality", "DLMF 34.3.16",
                    {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, j2, k3, m1, m2, n3)},
                    0,
                    lst{m1, m2},
-                   kdelta(j3, k3) * kdelta(m3, n3) * triangle(j1, j2, j3) / (2 * j3 + 1)});
+                   kdelta(j3, k3) * kdelta(m3, n3) * triangle(j1, j2, j3) / (2 * j3 + 1), lst{}, lst{}});
 
     // A line from a vertex back to itself: the metric is sqrt(2j+1) times the 3j with a zero
     // entry, and orthogonality closes the loop (DLMF 34.3.16 with 34.3.1's (j j 0) value).
@@ -92,8 +92,28 @@ std::vector<move> build() {
                    {wigner3j(j1, j1, c, m1, -m1, g)},
                    j1 - m1,
                    lst{m1},
-                   sqrt(2 * j1 + 1) * kdelta(c, 0) * kdelta(g, 0)});
+                   // tri(j1, j1, c) is 1 where c = 0, but it keeps the consumed triad for the
+                   // phase group: (-1)^c is an integer power because 2 j1 + c is an integer.
+                   sqrt(2 * j1 + 1) * kdelta(c, 0) * kdelta(g, 0) * triangle(j1, j1, c), lst{}, lst{}});
     return out;
+}
+
+move build_interchange() {
+    auto& p = symbols();
+    symbol a = p.j("j1"), b = p.j("j2"), e = p.j("j3"), c = p.j("l1"), d = p.j("l2"), x = p.j("x");
+    symbol al = p.m("m1", a), be = p.m("m2", b), ep = p.m("m3", e), ga = p.m("u1", c), de = p.m("u2", d);
+    symbol xi = p.m("xi", x);
+    // The four-leg tensor coupled as (a b) e (c d) expanded in the one coupled as (a c) x (b d):
+    // the coefficient is 3j orthogonality (DLMF 34.3.17) applied to the closed four-3j network,
+    // a 6j by DLMF 34.4.1 (equivalently DLMF 34.5.23 with 34.3.17).
+    move m{"interchange_recoupling", "DLMF 34.5.23 with 34.3.17",
+           {wigner3j(a, b, e, al, be, ep), wigner3j(e, c, d, -ep, ga, de)},
+           e - ep,
+           lst{ep},
+           make_phase(b + c + e + x + x - xi) * (2 * x + 1) * wigner6j(a, b, e, d, c, x) *
+               wigner3j(a, c, x, al, ga, xi) * wigner3j(x, b, d, -xi, be, de),
+           lst{x}, lst{xi}};
+    return m;
 }
 
 }  // namespace
@@ -103,8 +123,14 @@ const std::vector<move>& network_moves() {
     return moves;
 }
 
+const move& interchange_move() {
+    static const move m = build_interchange();
+    return m;
+}
+
 const quantum_numbers& pattern_numbers() {
     network_moves();
+    interchange_move();
     return symbols().numbers;
 }
 
@@ -112,6 +138,13 @@ ex left_side(const move& m) {
     ex body = make_phase(m.phase);
     for (const ex& s : m.threejs) body *= s;
     return make_sum(body, m.summed);
+}
+
+ex right_side(const move& m) {
+    ex r = m.result;
+    if (m.introduced_projections.nops() > 0) r = make_sum(r, m.introduced_projections);
+    if (m.introduced_angular.nops() > 0) r = make_sum(r, m.introduced_angular);
+    return r;
 }
 
 }  // namespace couplet::network

@@ -1,5 +1,8 @@
 #include "couplet/network/reduce.hpp"
 
+#include <deque>
+
+#include "couplet/model/fresh_index.hpp"
 #include "couplet/model/normalize.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/network/fixed_projection.hpp"
@@ -14,8 +17,75 @@ using namespace GiNaC;
 
 namespace {
 
-// Each move removes at least one summation index, so the loop ends; the cap only guards.
+// Each closing move removes at least one summation index, so the loop ends; the cap only guards.
 constexpr int max_moves_per_term = 64;
+// Each interchange shortens a shortest cycle; the cap bounds the nesting it builds.
+constexpr int max_interchanges = 48;
+
+// A cycle of the network: vertices v[0..k-1], line k joining v[k] and v[k+1 mod k].
+struct cycle {
+    std::vector<int> vertices, lines;
+};
+
+// Shortest simple cycles (length >= 3, parallel lines and loops ignored: the closing moves
+// handle those), at most one per root, shortest first.
+std::vector<cycle> shortest_cycles(const msum_term& t) {
+    const int n = static_cast<int>(t.threejs.size());
+    std::vector<std::vector<std::pair<int, int>>> next(n);  // (neighbour, line)
+    for (int l = 0; l < static_cast<int>(t.lines.size()); ++l) {
+        int u = t.lines[l].ends[0], w = t.lines[l].ends[1];
+        if (u == w) continue;
+        bool parallel = false;
+        for (auto [x, k] : next[u]) parallel = parallel || x == w;
+        if (parallel) continue;
+        next[u].push_back({w, l});
+        next[w].push_back({u, l});
+    }
+    std::vector<cycle> out;
+    for (int root = 0; root < n; ++root) {
+        std::vector<int> depth(n, -1), parent(n, -1), via(n, -1);
+        std::deque<int> queue{root};
+        depth[root] = 0;
+        std::optional<cycle> best;
+        while (!queue.empty() && !best) {
+            int u = queue.front();
+            queue.pop_front();
+            for (auto [w, l] : next[u]) {
+                if (l == via[u]) continue;
+                if (depth[w] < 0) {
+                    depth[w] = depth[u] + 1;
+                    parent[w] = u;
+                    via[w] = l;
+                    queue.push_back(w);
+                    continue;
+                }
+                // Two tree paths from the root meet across line l: a cycle if they share only the root.
+                std::vector<int> left, right, left_lines, right_lines;
+                for (int x = u; x != root; x = parent[x]) left.push_back(x), left_lines.push_back(via[x]);
+                for (int x = w; x != root; x = parent[x]) right.push_back(x), right_lines.push_back(via[x]);
+                bool simple = true;
+                for (int x : left)
+                    for (int y : right) simple = simple && x != y;
+                if (!simple) continue;
+                cycle c;
+                c.vertices.push_back(root);
+                for (auto it = left.rbegin(); it != left.rend(); ++it) c.vertices.push_back(*it);
+                for (auto it = left_lines.rbegin(); it != left_lines.rend(); ++it) c.lines.push_back(*it);
+                c.lines.push_back(l);
+                for (int x : right) c.vertices.push_back(x);
+                for (int x : right_lines) c.lines.push_back(x);
+                if (c.vertices.size() >= 3) best = c;
+                break;
+            }
+        }
+        if (best) out.push_back(*best);
+    }
+    std::stable_sort(out.begin(), out.end(),
+                     [](const cycle& a, const cycle& b) { return a.vertices.size() < b.vertices.size(); });
+    return out;
+}
+
+ex bare(const ex& e) { return is_a<symbol>(e) ? e : (-e).expand(); }
 
 class reducer : public map_function {
 public:
@@ -57,6 +127,17 @@ private:
                     break;
                 }
             }
+            // Only on a proper network: elsewhere the closing moves cannot finish what it starts.
+            if (!next && interchanges_ < max_interchanges && is_proper_network(*a.term)) {
+                next = interchange_on_a_shortest_cycle(*a.term, body);
+                if (next) {
+                    ++interchanges_;
+                    if (steps_) steps_->push_back({interchange_move().name, interchange_move().reference});
+                    ex n = merge_phases(*next);
+                    if (is_a<index_sum>(n)) return tidy(reduce_inside(ex_to<index_sum>(n)));
+                    return tidy(n);
+                }
+            }
             if (!next) {
                 // Last resort, since it leaves entries the moves do not match.
                 next = fix_projection_by_vertex(*a.term);
@@ -74,11 +155,54 @@ private:
         return changed ? tidy(out) : out;
     }
 
+    // Recoupling on a line of a shortest cycle, pairing the cycle's two neighbouring lines on
+    // one new vertex: the cycle loses that line.
+    std::optional<ex> interchange_on_a_shortest_cycle(const msum_term& t, const ex& body) {
+        const move& m = interchange_move();
+        const ex alpha = m.threejs[0].op(3), epsilon = m.threejs[0].op(5), gamma = m.threejs[1].op(4);
+        ex context = body;
+        for (const ex& o : outer_) context *= o;
+        symbol x = fresh_index(context, numbers_);
+        symbol xi = fresh_index(context * x, numbers_);
+        // No phase veto: the 6j keeps the triads (a b e), (e c d) of the two 3j it replaces and
+        // the new 3j keep every (j, m) pair but the summed one's, so the phase group proves the
+        // residue's integrality exactly as before the move (and proving it each time is costly).
+        move_options options;
+        options.fresh = {x, xi};
+        for (const cycle& c : shortest_cycles(t)) {
+            const std::size_t k = c.lines.size();
+            for (std::size_t i = 0; i < k; ++i) {
+                const ex e = t.lines[c.lines[i]].projection;
+                const ex p = t.lines[c.lines[(i + k - 1) % k]].projection;
+                const ex q = t.lines[c.lines[(i + 1) % k]].projection;
+                options.where = [&](const exmap& b) {
+                    return bare(b.at(epsilon)).is_equal(e) && bare(b.at(alpha)).is_equal(p) &&
+                           bare(b.at(gamma)).is_equal(q);
+                };
+                if (auto r = apply_move(m, t, options)) return r;
+            }
+        }
+        return std::nullopt;
+    }
+
+    // sum(x : sum(m's : ...)) after an interchange: the inner m-sum is reduced further.
+    ex reduce_inside(const index_sum& s) {
+        outer_.push_back(s.indices());
+        // Not through operator(): expanding (2x+1) would split the term in two.
+        ex inner = s.body();
+        if (is_a<index_sum>(inner)) inner = reduce_term(ex_to<index_sum>(inner).body(), ex_to<index_sum>(inner).indices());
+        else inner = (*this)(inner);
+        outer_.pop_back();
+        return make_sum(inner, s.indices());
+    }
+
     ex tidy(const ex& e) const { return merge_phases(symmetry::canonicalize_symbols(e, numbers_)); }
 
     const quantum_numbers& numbers_;
     std::vector<reduction_step>* steps_;
     result_check phases_provable_;
+    int interchanges_ = 0;
+    std::vector<ex> outer_;  // the indices of enclosing sums introduced here, kept from capture
 };
 
 }  // namespace

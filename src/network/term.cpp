@@ -1,5 +1,7 @@
 #include "couplet/network/term.hpp"
 
+#include <array>
+
 #include "couplet/model/symbols.hpp"
 
 namespace couplet::network {
@@ -25,6 +27,39 @@ std::optional<std::pair<symbol, int>> signed_index(const ex& entry, const lst& i
     return std::nullopt;
 }
 
+// Whether x_u + x_v = parity (mod 2) for every equation (u, v, parity) has a solution.
+bool parities_solvable(std::size_t n, const std::vector<std::array<int, 3>>& equations) {
+    std::vector<int> value(n, -1);
+    std::vector<std::vector<std::pair<int, int>>> next(n);
+    for (const auto& [u, v, p] : equations) {
+        if (u == v) {
+            if (p) return false;
+            continue;
+        }
+        next[u].push_back({v, p});
+        next[v].push_back({u, p});
+    }
+    for (std::size_t root = 0; root < n; ++root) {
+        if (value[root] >= 0) continue;
+        value[root] = 0;
+        std::vector<int> stack{static_cast<int>(root)};
+        while (!stack.empty()) {
+            int u = stack.back();
+            stack.pop_back();
+            for (auto [v, p] : next[u]) {
+                int want = value[u] ^ p;
+                if (value[v] < 0) {
+                    value[v] = want;
+                    stack.push_back(v);
+                } else if (value[v] != want) {
+                    return false;
+                }
+            }
+        }
+    }
+    return true;
+}
+
 }  // namespace
 
 term_analysis analyze_term(const ex& body, const lst& indices, const quantum_numbers& numbers) {
@@ -33,8 +68,10 @@ term_analysis analyze_term(const ex& body, const lst& indices, const quantum_num
     t.summed = indices;
     for (const ex& i : indices) {
         if (!is_a<symbol>(i)) return {std::nullopt, "an index is not a name"};
+        // An unregistered index is one a move introduced (a fresh projection); the slot checks
+        // below confine it to bottom rows like any other.
         const quantum_number* q = numbers.find(ex_to<symbol>(i));
-        if (!q || q->role != qn_role::projection) return {std::nullopt, "an index is not a projection"};
+        if (q && q->role != qn_role::projection) return {std::nullopt, "an index is not a projection"};
     }
     exvector factors;
     if (is_a<mul>(body))
@@ -59,7 +96,7 @@ term_analysis analyze_term(const ex& body, const lst& indices, const quantum_num
         }
     }
     for (const ex& i : indices) {
-        line l{ex_to<symbol>(i)};
+        line l{ex_to<symbol>(i), {-1, -1}, 0};
         t.lines.push_back(l);
     }
     for (std::size_t v = 0; v < t.threejs.size(); ++v) {
@@ -90,6 +127,31 @@ term_analysis analyze_term(const ex& body, const lst& indices, const quantum_num
         if (l.ends[1] < 0) return {std::nullopt, "a summed projection in fewer than two slots"};
     out.term = t;
     return out;
+}
+
+bool is_proper_network(const msum_term& t) {
+    std::vector<std::array<int, 3>> flips, rules;
+    for (const line& l : t.lines) {
+        // The signs of the line's two slots: both in one vertex for a loop.
+        std::vector<int> signs;
+        int vertices[2] = {l.ends[0], l.ends[0] == l.ends[1] ? -1 : l.ends[1]};
+        for (int v : vertices) {
+            if (v < 0) continue;
+            for (int c = 3; c < 6; ++c) {
+                ex entry = t.threejs[v].op(c);
+                if ((entry - l.projection).expand().is_zero()) signs.push_back(1);
+                else if ((entry + l.projection).expand().is_zero()) signs.push_back(-1);
+            }
+        }
+        if (signs.size() != 2) return false;
+        int sign[2] = {signs[0], signs[1]}, k = 2;
+        if (k < 2) return false;
+        ex c = t.exponent.expand().coeff(l.projection, 1);
+        if (!is_a<numeric>(c) || !ex_to<numeric>(c).is_integer()) return false;
+        flips.push_back({l.ends[0], l.ends[1], sign[0] == sign[1] ? 1 : 0});
+        rules.push_back({l.ends[0], l.ends[1], ex_to<numeric>(c).is_odd() ? 0 : 1});
+    }
+    return parities_solvable(t.threejs.size(), flips) && parities_solvable(t.threejs.size(), rules);
 }
 
 ex summand_of(const msum_term& t) {

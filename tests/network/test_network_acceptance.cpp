@@ -5,7 +5,9 @@
 
 #include <nlohmann/json.hpp>
 
+#include "network_corpus.hpp"
 #include "network_points.hpp"
+#include "random_network.hpp"
 #include "support.hpp"
 
 using namespace couplet;
@@ -17,14 +19,39 @@ struct simplified {
     testing::agreement agreement;
 };
 
-simplified simplify_and_compare(const std::string& input, unsigned seed) {
+simplified simplify_and_compare(const std::string& input, unsigned seed, int samples = 200, int twice_max = 4) {
     auto r = testing::run_cli({"simplify", "--format", "json", "-e", input});
     REQUIRE(r.code == 0);
     std::string result = nlohmann::json::parse(r.out).at("result");
     auto program = testing::lower_text(input + "\n" + result);
     auto a = testing::compare_at_points(program.statements[0].value, program.statements[1].value, program.numbers,
-                                        seed, 200, 4);
+                                        seed, samples, twice_max);
     return {result, a};
+}
+
+// Summation indices and 6j factors of a printed result, read back.
+struct shape {
+    int indices = 0, sixj = 0, threej = 0;
+};
+
+shape shape_of(const std::string& result) {
+    GiNaC::ex e = testing::lower_last(result);
+    shape s;
+    for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
+        if (GiNaC::is_a<index_sum>(*it)) s.indices += static_cast<int>(GiNaC::ex_to<index_sum>(*it).indices().nops());
+        if (kind_of(*it) == symbol_kind::sixj) ++s.sixj;
+        if (kind_of(*it) == symbol_kind::threej) ++s.threej;
+    }
+    return s;
+}
+
+simplified simplify_graph(const std::string& name, unsigned seed, int samples, int twice_max) {
+    for (const auto& g : testing::network_corpus())
+        if (g.name == name)
+            return simplify_and_compare(testing::graph_network_text(g.vertices, g.edges, g.open, seed), seed, samples,
+                                        twice_max);
+    FAIL("no network named " << name);
+    return {};
 }
 
 bool has_sum(const std::string& text) { return text.find("sum(") != std::string::npos; }
@@ -144,4 +171,66 @@ TEST_CASE("five 3j with three free m leave 3j times 9j", "[network][acceptance]"
     CHECK(s.result.find("3j(") != std::string::npos);
     CHECK(s.agreement.equal == s.agreement.points);
     CHECK(s.agreement.nonzero > 10);
+}
+
+TEST_CASE("a square with four open lines becomes one sum of two 6j and two 3j", "[network][acceptance]") {
+    // DLMF 34.5.23 with 34.3.17 (the interchange), then DLMF 34.5.23 on the triangle it leaves.
+    auto s = simplify_graph("square, four open lines", 21, 60, 2);
+    INFO(s.result);
+    shape sh = shape_of(s.result);
+    CHECK(sh.indices == 1);
+    CHECK(sh.sixj == 2);
+    CHECK(sh.threej == 2);
+    CHECK(s.agreement.points == 60);
+    CHECK(s.agreement.equal == s.agreement.points);
+    CHECK(s.agreement.nonzero > 5);
+}
+
+TEST_CASE("the triangular prism separates into two 6j", "[network][acceptance]") {
+    // Common practice, no source: the prism has a 3-line cut; each side closes to a 6j
+    // (DLMF 34.5.23 on one triangle, then DLMF 34.4.1).
+    auto s = simplify_graph("triangular prism", 22, 30, 2);
+    INFO(s.result);
+    shape sh = shape_of(s.result);
+    CHECK(sh.indices == 0);
+    CHECK(sh.sixj == 2);
+    CHECK(sh.threej == 0);
+    CHECK(s.agreement.equal == s.agreement.points);
+    CHECK(s.agreement.nonzero > 3);
+}
+
+TEST_CASE("the closed 12j of the first kind is a single sum of four 6j", "[network][acceptance]") {
+    // Common practice, no source: the Moebius ladder of eight vertices; the literature's form
+    // has one summation index and four 6j.
+    auto s = simplify_graph("Moebius ladder of 8 vertices (12j, first kind)", 23, 12, 2);
+    INFO(s.result);
+    shape sh = shape_of(s.result);
+    CHECK(sh.indices == 1);
+    CHECK(sh.sixj == 4);
+    CHECK(sh.threej == 0);
+    CHECK(s.agreement.points == 12);
+    CHECK(s.agreement.equal == s.agreement.points);
+    CHECK(s.agreement.nonzero > 0);
+}
+
+TEST_CASE("closed 15j networks become sums of 6j with at most two indices", "[network][acceptance]") {
+    // Common practice, no source: the ladder-shaped 15j (pentagonal prism, Moebius ladder of ten
+    // vertices) reduce with one interchange to a single sum of five 6j.
+    for (std::string name : {"pentagonal prism (15j)", "Moebius ladder of 10 vertices (15j)"}) {
+        auto s = simplify_graph(name, 24, 6, 2);
+        INFO(name << " -> " << s.result);
+        shape sh = shape_of(s.result);
+        CHECK(sh.indices <= 2);
+        CHECK(sh.sixj == 5);
+        CHECK(sh.threej == 0);
+        CHECK(s.agreement.equal == s.agreement.points);
+    }
+}
+
+TEST_CASE("the Petersen network closes without any m-sum", "[network][acceptance]") {
+    // Common practice, no source: girth 5, so two interchanges precede any closing move.
+    auto s = simplify_graph("Petersen graph (15j)", 25, 6, 2);
+    INFO(s.result);
+    CHECK(shape_of(s.result).threej == 0);
+    CHECK(s.agreement.equal == s.agreement.points);
 }

@@ -11,43 +11,42 @@
 
 using namespace couplet;
 
-namespace {
-
-int sums_in(const GiNaC::ex& e) {
-    int n = 0;
-    for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it)
-        if (GiNaC::is_a<index_sum>(*it)) n += static_cast<int>(GiNaC::ex_to<index_sum>(*it).indices().nops());
-    return n;
-}
-
-}  // namespace
-
-TEST_CASE("random networks of 2 to 6 vertices reduce without a single mismatch", "[network][random]") {
+TEST_CASE("random networks of 2 to 10 vertices reduce without a single mismatch", "[network][random]") {
     // Common practice, no source: an identity holds when both sides agree exactly at every
-    // sampled admissible point; the input side is the defining sum, enumerated.
+    // sampled admissible point; the input side is the defining sum, enumerated.  Every other
+    // network is a proper Yutsis network (each line with its metric), which the moves must
+    // reduce completely (not yet reached: a phase the veto cannot prove still stops a few, so
+    // the bound below is a floor to raise); the others may keep lines no move fits, but never a
+    // wrong value.
     std::mt19937 rng(2026);
     int networks = 0, closed = 0, partly = 0, unreduced = 0, mismatches = 0, points = 0, nonzero = 0;
+    int proper = 0, proper_with_msum = 0;
     for (int k = 0; k < 500; ++k) {
-        auto net = testing::make_random_network(rng, 2, 6, 3);
+        bool every_line_metric = k % 2 == 0;
+        auto net = testing::make_random_network(rng, 2, 10, 3, every_line_metric);
         INFO(net.text);
         auto program = testing::lower_text(net.text);
         GiNaC::ex input = program.statements.back().value;
         GiNaC::ex output = simplify_expression(input, program.numbers);
-        int before = net.lines, after = sums_in(output);
-        (after == 0 ? closed : after < before ? partly : unreduced) += 1;
-        auto a = testing::compare_at_points(input, output, program.numbers, 100 + k, 4, 2);
         INFO("  -> " << output);
+        int before = net.lines, after = testing::msum_indices_in(output);
+        (after == 0 ? closed : after < before ? partly : unreduced) += 1;
+        if (every_line_metric) {
+            ++proper;
+            proper_with_msum += after > 0;
+        }
+        auto a = testing::compare_at_points(input, output, program.numbers, 100 + k, 2, 2);
         CHECK(a.equal == a.points);
         mismatches += a.points - a.equal;
         points += a.points;
         nonzero += a.nonzero;
         ++networks;
     }
-    std::cout << "random networks: " << networks << " (" << closed << " without sums, " << partly
-              << " with fewer sums, " << unreduced << " unreduced), " << points << " points (" << nonzero
-              << " nonzero), " << mismatches << " mismatches\n";
+    std::cout << "random networks: " << networks << " (" << closed << " without m-sums, " << partly
+              << " with fewer, " << unreduced << " unreduced; " << proper_with_msum << " of " << proper
+              << " proper ones with an m-sum left), " << points << " points (" << nonzero << " nonzero), "
+              << mismatches << " mismatches\n";
     CHECK(mismatches == 0);
-    // Without the interchange move longer cycles stay summed; the moves must still bite.
-    CHECK(closed >= networks / 20);
-    CHECK(closed + partly >= networks * 2 / 5);
+    CHECK(proper_with_msum * 4 <= proper);
+    CHECK(nonzero >= points / 10);  // the points test something
 }

@@ -10,6 +10,7 @@
 
 #include <functional>
 #include <optional>
+#include <vector>
 
 #include "couplet/network/move.hpp"
 #include "couplet/network/term.hpp"
@@ -20,8 +21,20 @@ namespace couplet::network {
 // exponent an integer from the result's own factors); the search then goes on.
 using result_check = std::function<bool(const GiNaC::ex&)>;
 
+// Where a move may bind: the pattern symbols' values (e.g. which lines an interchange pairs).
+using binding_check = std::function<bool(const GiNaC::exmap&)>;
+
+struct move_options {
+    result_check accept;
+    binding_check where;
+    // Fresh names for the move's introduced symbols, angular ones first, then projections.
+    std::vector<GiNaC::symbol> fresh;
+};
+
 // The term after the move, as sum(remaining indices : ...), or nothing when the move does not
-// apply anywhere in the term (or only where `accept` refuses).
+// apply anywhere in the term (or only where `accept` or `where` refuses).  A move that
+// introduces a sum over x gives sum(x : sum(remaining indices and x's projection : ...)).
 std::optional<GiNaC::ex> apply_move(const move& m, const msum_term& term, const result_check& accept = {});
+std::optional<GiNaC::ex> apply_move(const move& m, const msum_term& term, const move_options& options);
 
 }  // namespace couplet::network

@@ -39,6 +39,11 @@ struct term_analysis {
 // no factor other than the 3j's and the phase involves an index.
 term_analysis analyze_term(const GiNaC::ex& body, const GiNaC::lst& indices, const quantum_numbers& numbers);
 
+// Whether every line is a proper contraction sum_m (-1)^(j-m) (..m..)(..-m..) once some
+// vertices are flipped (m -> -m in all three columns) and some vertex rules m1+m2+m3 = 0 are
+// added to the phase: the Yutsis networks, on which the recoupling moves always close up.
+bool is_proper_network(const msum_term& t);
+
 // The product the analysis describes, without the sum.
 GiNaC::ex summand_of(const msum_term& t);
 

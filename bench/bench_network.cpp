@@ -1,0 +1,68 @@
+// Figures for the m-sum stage: for each network of the acceptance corpus and for random proper
+// networks of 6 to 30 vertices, the time to simplify (the network stage alone, and the whole
+// pipeline with the j-sum rules), the number of summation indices and of 6j factors in the
+// result, and whether an m-sum is left.  Prints a table; asserts nothing.
+// Usage: bench_network [RANDOM_PER_SIZE]   (default 3)
+#include <ctime>
+#include <cstdio>
+#include <cstdlib>
+#include <string>
+
+#include "couplet/model/lower.hpp"
+#include "couplet/model/normalize.hpp"
+#include "couplet/network/reduce.hpp"
+#include "couplet/simplify.hpp"
+#include "couplet/symmetry/symmetries.hpp"
+#include "network/network_corpus.hpp"
+#include "network/random_network.hpp"
+
+using namespace couplet;
+
+namespace {
+
+struct counts {
+    int indices = 0, sixj = 0;
+};
+
+counts count(const GiNaC::ex& e) {
+    counts c;
+    for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
+        if (GiNaC::is_a<index_sum>(*it)) c.indices += static_cast<int>(GiNaC::ex_to<index_sum>(*it).indices().nops());
+        if (kind_of(*it) == symbol_kind::sixj) ++c.sixj;
+    }
+    return c;
+}
+
+// Processor time, not wall time: the machine is shared, and wall time measures the neighbours.
+double ms_since(std::clock_t t0) { return 1000.0 * static_cast<double>(std::clock() - t0) / CLOCKS_PER_SEC; }
+
+void row(const std::string& name, const std::string& text) {
+    auto program = read_program(source_file("<bench>", text));
+    GiNaC::ex input = program.statements.back().value;
+    auto t0 = std::clock();
+    GiNaC::ex x = merge_phases(symmetry::canonicalize_symbols(normalize(input), program.numbers).expand());
+    GiNaC::ex reduced = network::reduce_msums(x, program.numbers);
+    double network_ms = ms_since(t0);
+    auto t1 = std::clock();
+    GiNaC::ex out = simplify_expression(input, program.numbers);
+    double total_ms = ms_since(t1);
+    counts after_network = count(reduced), after = count(out);
+    std::printf("%-50s %9.1f %9.1f %5d/%-3d %5d/%-3d %s\n", name.c_str(), network_ms, total_ms, after_network.indices,
+                after.indices, after_network.sixj, after.sixj, testing::msum_indices_in(out) > 0 ? "yes" : "no");
+}
+
+}  // namespace
+
+int main(int argc, char** argv) {
+    const int per_size = argc > 1 ? std::atoi(argv[1]) : 3;
+    std::printf("%-50s %9s %9s %9s %9s %s\n", "case", "net ms", "all ms", "sums", "6j", "m-sum left");
+    std::printf("%-50s %9s %9s %9s %9s\n", "", "", "", "net/all", "net/all");
+    for (const auto& g : testing::network_corpus()) row(g.name, testing::graph_network_text(g.vertices, g.edges, g.open, 5));
+    std::mt19937 rng(2027);
+    for (int n = 6; n <= 30; n += 4)
+        for (int k = 0; k < per_size; ++k) {
+            auto net = testing::make_random_network(rng, n, n, 3, true);
+            row("random proper network, " + std::to_string(n) + " vertices, " + std::to_string(net.open) + " open",
+                net.text);
+        }
+}
