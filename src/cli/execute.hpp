@@ -33,9 +33,9 @@ struct outcome {
     // couplet caught itself in an error (a simplification that changes the value): the
     // record shows the input unchanged and `diagnostic` says what went wrong.
     bool internal_failure = false;
+    std::string diagnostic = {};
     // The time limit ended the statement; the record shows what was established before it.
     bool stopped = false;
-    std::string diagnostic = {};
 };
 
 // Throws user_error (pointing at the statement) when the request cannot be carried out.

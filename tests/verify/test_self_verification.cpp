@@ -43,7 +43,8 @@ TEST_CASE("simplify JSON reports the verification", "[verify][cli]") {
     REQUIRE(r.code == 0);
     auto j = nlohmann::json::parse(r.out);
     CHECK(j.at("verified") == true);
-    CHECK(j.at("points").get<int>() > 50);
+    // The time-matched budget guarantees its minimum whatever the machine's speed.
+    CHECK(j.at("points").get<std::size_t>() >= verify::verification_budget{}.min_points);
     r = run_cli({"simplify", "--no-verify", "--format", "json", "-e", "(-1)^(a+b) * (-1)^(b+c) * 3j(a, b, c; 0, 0, 0)"});
     REQUIRE(r.code == 0);
     j = nlohmann::json::parse(r.out);
