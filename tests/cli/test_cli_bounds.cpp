@@ -35,7 +35,7 @@ TEST_CASE("the expansion size is counted without expanding", "[cli][bounds]") {
     CHECK(expanded_term_count(GiNaC::pow(a + b, 1000)) == std::numeric_limits<std::size_t>::max());
 }
 
-TEST_CASE("--max-terms refuses a large expansion at the statement, exit 2", "[cli][bounds]") {
+TEST_CASE("max-terms: refuses a large expansion at the statement, exit 2", "[cli][bounds]") {
     const std::string input = "eval 1\n(a+b+c)^2 * (d+e+f+g)^2 * 3j(a, b, c; 0, 0, 0)\n";
     auto r = run_cli({"simplify", "--max-terms", "100", "-"}, input);
     CHECK(r.code == 2);
@@ -48,14 +48,14 @@ TEST_CASE("--max-terms refuses a large expansion at the statement, exit 2", "[cl
     CHECK(run_cli({"simplify", "--no-verify", "-"}, input).code == 0);
 }
 
-TEST_CASE("--max-terms leaves check to decide by evaluation alone", "[cli][bounds]") {
+TEST_CASE("max-terms: leaves check to decide by evaluation alone", "[cli][bounds]") {
     auto r = run_cli({"check", "--max-terms", "5", "-e", "(a+b)^3 == a^3 + 3*a^2*b + 3*a*b^2 + b^3"});
     CHECK(r.code == 0);
     CHECK(r.out.find("holds") != std::string::npos);
     CHECK(r.out.find("no symbolic proof") != std::string::npos);
 }
 
-TEST_CASE("--time-limit stops after the finished statements and says so", "[cli][bounds]") {
+TEST_CASE("time-limit: stops after the finished statements and says so", "[cli][bounds]") {
     // A sum of 10 001 exact 6j values with entries near 5000 takes far longer than 0.3 s.
     const std::string input =
         "eval 3j(1, 1, 0; 0, 0, 0)\n"
@@ -81,7 +81,7 @@ TEST_CASE("the help states every bound with its value", "[cli][bounds]") {
 }
 
 // [timing]: drawing the sample must take well under the limit, which a sanitizer build may not do.
-TEST_CASE("--time-limit during check prints what the points established", "[cli][bounds][timing]") {
+TEST_CASE("time-limit: during check prints what the points established", "[cli][bounds][timing]") {
     // DLMF 34.5.14 (6j orthogonality), checked at far more points than 1 s allows.
     const std::string identity =
         "sum(x : (2*x+1) * 6j{a, b, x; c, d, p} * 6j{c, d, x; a, b, q}) == delta(p, q)*tri(a, d, p)*tri(b, c, p)/(2*p+1)";

@@ -6,7 +6,7 @@
 
 using couplet::testing::run_cli;
 
-TEST_CASE("--steps lists each applied rule with its reference", "[cli][steps]") {
+TEST_CASE("steps: lists each applied rule with its reference", "[cli][steps]") {
     // 6j orthogonality, DLMF 34.5.14, with the columns of the second 6j permuted.
     const std::string input = "sum(x : (2*x+1) * 6j{a, b, x; c, d, p} * 6j{d, c, x; b, a, q})";
     auto r = run_cli({"simplify", "--steps", "-e", input});
@@ -29,7 +29,7 @@ TEST_CASE("--steps lists each applied rule with its reference", "[cli][steps]") 
     CHECK_FALSE(record.contains("steps_text"));
 }
 
-TEST_CASE("--steps says so when nothing applies, and the network moves are listed", "[cli][steps]") {
+TEST_CASE("steps: says so when nothing applies, and the network moves are listed", "[cli][steps]") {
     auto none = run_cli({"simplify", "--steps", "-e", "6j{a, b, c; d, e, f}"});
     CHECK(none.out.find("# ") != std::string::npos);
     CHECK(none.out.find("no move or rule applied") != std::string::npos);
