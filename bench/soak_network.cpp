@@ -36,7 +36,7 @@ int main(int argc, char** argv) {
             int after = testing::msum_indices_in(output);
             (after == 0 ? closed : after < net.lines ? partly : unreduced) += 1;
             auto t1 = std::chrono::steady_clock::now();
-            auto a = testing::compare_at_points(input, output, program.numbers, 1000 + k, 3, 2);
+            auto a = testing::network_agreement_at_points(input, output, program.numbers, 1000 + k, 3, 2);
             check_ms += std::chrono::duration<double, std::milli>(std::chrono::steady_clock::now() - t1).count();
             points += a.points;
             nonzero += a.nonzero;

@@ -131,12 +131,13 @@ private:
 };
 
 // How many random points were drawn, at how many the two sides agree exactly, and how many
-// of those were nonzero.
+// of those were nonzero.  (Named apart from rules/jsum_check.hpp's compare_at_points: two
+// inline functions with one signature in one program would be an ODR violation.)
 struct agreement {
     int points = 0, equal = 0, nonzero = 0;
 };
 
-inline agreement compare_at_points(const GiNaC::ex& lhs, const GiNaC::ex& rhs, const quantum_numbers& numbers,
+inline agreement network_agreement_at_points(const GiNaC::ex& lhs, const GiNaC::ex& rhs, const quantum_numbers& numbers,
                                    unsigned seed, int samples, int twice_max) {
     compiled_expression left(lhs, numbers), right(rhs, numbers);
     network_points points(lhs, numbers, seed, twice_max);

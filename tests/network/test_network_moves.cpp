@@ -17,7 +17,7 @@ TEST_CASE("every network move holds exactly at 200 random admissible points", "[
     moves.push_back(network::interchange_move());
     for (const auto& m : moves) {
         INFO(m.name << " (" << m.reference << ")");
-        auto a = testing::compare_at_points(network::left_side(m), network::right_side(m), network::pattern_numbers(),
+        auto a = testing::network_agreement_at_points(network::left_side(m), network::right_side(m), network::pattern_numbers(),
                                             seed++, 200, 4);
         CHECK(a.points == 200);
         CHECK(a.equal == a.points);
@@ -36,7 +36,7 @@ TEST_CASE("a wrong phase in a move's pattern is caught by its self-test", "[netw
         const auto& q = network::pattern_numbers();
         GiNaC::ex l1 = q.find("l1")->symbol, u1 = q.find("u1")->symbol;
         broken.phase = m.phase - l1 - u1;
-        auto a = testing::compare_at_points(network::left_side(broken), m.result, network::pattern_numbers(), 5, 100, 4);
+        auto a = testing::network_agreement_at_points(network::left_side(broken), m.result, network::pattern_numbers(), 5, 100, 4);
         CHECK(a.equal < a.points);
     }
 }
@@ -48,6 +48,6 @@ TEST_CASE("the interchange move fails its self-test without the phase of the new
     const auto& q = network::pattern_numbers();
     GiNaC::ex b = q.find("j2")->symbol, c = q.find("l1")->symbol, e = q.find("j3")->symbol, x = q.find("x")->symbol;
     broken.result = broken.result * couplet::make_phase(-(b + c + e + x));
-    auto a = testing::compare_at_points(network::left_side(broken), network::right_side(broken), q, 6, 100, 4);
+    auto a = testing::network_agreement_at_points(network::left_side(broken), network::right_side(broken), q, 6, 100, 4);
     CHECK(a.equal < a.points);
 }
