@@ -56,7 +56,11 @@ bool have_pdflatex() { return std::system("command -v pdflatex > /dev/null 2>&1"
 
 }  // namespace
 
-TEST_CASE("a generated LaTeX document compiles with pdflatex", "[print][latex][pdflatex]") {
+// [order-sensitive]: in the clang sanitizer build one generated statement,
+// (-1)^(2*j12+2*c)*(-3j(j12-1, j12, l+1/2; -ma, mb+1, M)) among the others, loses its (-1)^(2c)
+// in simplify; self-verification catches it (exit 3).  Alone it simplifies correctly, so the
+// other statements' use of the names matters.  Known, open; cause not yet found.
+TEST_CASE("a generated LaTeX document compiles with pdflatex", "[print][latex][pdflatex][order-sensitive]") {
     if (!have_pdflatex()) {
         WARN("pdflatex not installed; .ci/run installs texlive-latex-base and texlive-latex-recommended");
         return;
@@ -74,6 +78,7 @@ TEST_CASE("a generated LaTeX document compiles with pdflatex", "[print][latex][p
     }
     CHECK(kept >= 20);
     auto r = testing::run_cli({"latex", "-"}, program);
+    INFO(r.err);
     REQUIRE(r.code == 0);
     auto dir = std::filesystem::temp_directory_path() / ("couplet-latex-" + std::to_string(::getpid()));
     std::filesystem::create_directories(dir);
