@@ -1,6 +1,7 @@
 #include "couplet/simplify.hpp"
 
 #include "couplet/model/normalize.hpp"
+#include "couplet/network/completeness.hpp"
 #include "couplet/network/reduce.hpp"
 #include "couplet/run_limits.hpp"
 #include "couplet/rules/engine.hpp"
@@ -26,6 +27,10 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     steps_taken.clear();
     GiNaC::ex x = normalize(e);
     x = symmetry::canonicalize_symbols(x, numbers);
+    std::vector<network::reduction_step> completeness;
+    GiNaC::ex before_completeness = x;
+    x = network::reduce_completeness(x, numbers, &completeness);
+    record_network_steps(completeness, before_completeness, x);
     check_expansion(x);
     x = merge_phases(x.expand());
     check_deadline();
