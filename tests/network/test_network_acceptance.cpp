@@ -5,6 +5,7 @@
 
 #include <nlohmann/json.hpp>
 
+#include "acceptance_inputs.hpp"
 #include "network_corpus.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"
@@ -60,7 +61,7 @@ bool has_sum(const std::string& text) { return text.find("sum(") != std::string:
 
 TEST_CASE("CG orthogonality over m1, m2 becomes deltas", "[network][acceptance]") {
     // DLMF 34.3.16 through DLMF 34.1.1: sum_m1,m2 <a m1, b m2|c M><a m1, b m2|d M'> = delta delta tri.
-    auto s = simplify_and_compare("sum(m1, m2 : <b m2, a m1 | c M> * <a m1, b m2 | d Mp>)", 1);
+    auto s = simplify_and_compare(testing::acceptance::cg_orthogonality, 1);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.result.find("delta") != std::string::npos);
@@ -71,7 +72,7 @@ TEST_CASE("CG orthogonality over m1, m2 becomes deltas", "[network][acceptance]"
 
 TEST_CASE("a 3j squared summed over all three m is the triangle condition", "[network][acceptance]") {
     // DLMF 34.3.16 summed over m3 (2j3+1 values): sum_m 3j^2 = tri(j1, j2, j3).
-    auto s = simplify_and_compare("sum(m1, m2, m3 : 3j(b, a, c; m2, m1, m3) * (-1)^(2*a+2*m1) * 3j(c, b, a; -m3, -m2, -m1))", 2);
+    auto s = simplify_and_compare(testing::acceptance::threej_squared, 2);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.agreement.equal == s.agreement.points);
@@ -80,11 +81,7 @@ TEST_CASE("a 3j squared summed over all three m is the triangle condition", "[ne
 
 TEST_CASE("four 3j summed over all six m become one 6j", "[network][acceptance]") {
     // DLMF 34.4.1, columns permuted, one 3j as a CG (DLMF 34.1.1), metrics written as (j+m).
-    auto s = simplify_and_compare(
-        "sum(m1, m2, m3, u1, u2, u3 : (-1)^(l1 + l2 + l3 - u1 - u2 - u3) * (-1)^(j1 - j2 - m3) / sqrt(2*j3 + 1)"
-        " * <j1 m1, j2 m2 | j3 -m3> * 3j(l3, j1, l2; -u3, m1, u2) * 3j(l1, l3, j2; -u1, u3, m2)"
-        " * 3j(j3, l2, l1; m3, -u2, u1))",
-        3);
+    auto s = simplify_and_compare(testing::acceptance::four_threej_sixj, 3);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.result.find("6j{") != std::string::npos);
@@ -95,10 +92,7 @@ TEST_CASE("four 3j summed over all six m become one 6j", "[network][acceptance]"
 
 TEST_CASE("three 3j summed over three m leave 3j times 6j", "[network][acceptance]") {
     // DLMF 34.5.23 with every vertex flipped (m -> -m) and columns reordered.
-    auto s = simplify_and_compare(
-        "sum(u1, u2, u3 : (-1)^(l1 + l2 + l3 + u1 + u2 + u3) * 3j(l3, l2, j1; u3, -u2, -m1)"
-        " * 3j(j2, l1, l3; -m2, u1, -u3) * 3j(l2, j3, l1; u2, -m3, -u1))",
-        4);
+    auto s = simplify_and_compare(testing::acceptance::three_threej_threej_sixj, 4);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.result.find("6j{") != std::string::npos);
@@ -109,7 +103,7 @@ TEST_CASE("three 3j summed over three m leave 3j times 6j", "[network][acceptanc
 
 TEST_CASE("a line closed on one vertex becomes deltas", "[network][acceptance]") {
     // DLMF 34.3.1 with 34.3.16: sum_m (-1)^(j-m) 3j(j j c; m -m g) = sqrt(2j+1) delta(c,0) delta(g,0).
-    auto s = simplify_and_compare("sum(m : (-1)^(j + m) * 3j(j, c, j; m, g, -m))", 5);
+    auto s = simplify_and_compare(testing::acceptance::loop_on_a_vertex, 5);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.agreement.equal == s.agreement.points);
@@ -118,10 +112,7 @@ TEST_CASE("a line closed on one vertex becomes deltas", "[network][acceptance]")
 TEST_CASE("a bubble inside a larger network leaves the rest summed", "[network][acceptance]") {
     // DLMF 34.3.16 on the two vertices sharing m1, m2; the delta on m3, m4 removes one index,
     // and the selection rule of DLMF 34.2 (m1+m2+m3 = 0) fixes the last one.
-    auto s = simplify_and_compare(
-        "sum(m1, m2, m3, m4 : 3j(a, b, c; m1, m2, m3) * 3j(b, a, d; -m2, -m1, -m4) * 3j(c, e, f; -m3, M, N)"
-        " * 3j(d, e, f; m4, -M, -N) * (-1)^(c - m3 + d - m4))",
-        6);
+    auto s = simplify_and_compare(testing::acceptance::bubble_in_a_network, 6);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.agreement.equal == s.agreement.points);
@@ -131,8 +122,7 @@ TEST_CASE("a bubble inside a larger network leaves the rest summed", "[network][
 TEST_CASE("a term that is not a network is left summed and still correct", "[network][acceptance]") {
     // An entry mixing a summed m with a free one; and a loop whose phase no move matches. Common practice, no source:
     // such terms have no closed form by these moves.
-    for (std::string input : {"sum(m : 3j(a, b, c; m, -M, M - m) * 3j(a, b, c; m, M, N))",
-                              "sum(m : 3j(a, a, c; m, -m, 0))"}) {
+    for (std::string input : {testing::acceptance::mixed_entry, testing::acceptance::unmatched_loop}) {
         auto s = simplify_and_compare(input, 7);
         INFO(input << " -> " << s.result);
         CHECK(has_sum(s.result));
@@ -144,13 +134,7 @@ TEST_CASE("a term that is not a network is left summed and still correct", "[net
 TEST_CASE("six 3j summed over all nine m become one 9j", "[network][acceptance]") {
     // DLMF 34.6.1 with columns permuted, one column 3j with every m reversed, one row as a CG
     // (DLMF 34.1.1), and a phase (-1)^(2 x11 - 2 a11) = 1 to absorb.
-    auto s = simplify_and_compare(
-        "sum(x11, x12, x13, x21, x22, x23, x31, x32, x33 :"
-        " 3j(a12, a11, a13; x12, x11, x13) * 3j(a21, a22, a23; x21, x22, x23)"
-        " * (-1)^(a32 - a31 - x33) / sqrt(2*a33 + 1) * <a31 x31, a32 x32 | a33 -x33>"
-        " * 3j(a11, a21, a31; -x11, -x21, -x31) * 3j(a22, a12, a32; x22, x12, x32)"
-        " * 3j(a13, a23, a33; x13, x23, x33) * (-1)^(2*x11 - 2*a11))",
-        8);
+    auto s = simplify_and_compare(testing::acceptance::six_threej_ninej, 8);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.result.find("9j{") != std::string::npos);
@@ -160,11 +144,7 @@ TEST_CASE("six 3j summed over all nine m become one 9j", "[network][acceptance]"
 
 TEST_CASE("five 3j with three free m leave 3j times 9j", "[network][acceptance]") {
     // DLMF 34.6.1 with 34.3.16: the third column left open; rows reordered, a column reversed.
-    auto s = simplify_and_compare(
-        "sum(x11, x12, x21, x22, x31, x32 :"
-        " 3j(a13, a12, a11; x13, x12, x11) * 3j(a21, a22, a23; x21, x22, x23) * 3j(a31, a32, a33; x31, x32, x33)"
-        " * 3j(a31, a21, a11; -x31, -x21, -x11) * 3j(a12, a22, a32; x12, x22, x32))",
-        9);
+    auto s = simplify_and_compare(testing::acceptance::five_threej_threej_ninej, 9);
     INFO(s.result);
     CHECK_FALSE(has_sum(s.result));
     CHECK(s.result.find("9j{") != std::string::npos);
