@@ -51,7 +51,6 @@ outcome simplify(const lowered_statement& s, const lowered_program& program, con
             steps.push_back({{"rule", step.rule}, {"reference", step.reference}, {"before", to_text(step.before)},
                              {"after", to_text(step.after)}});
         record["steps"] = steps;
-        record["steps_text"] = format_jsum_trace(last_simplification_steps());
     }
     if (!options.verify_simplify) return {record};
     verify::simplification_check v;

@@ -1,5 +1,7 @@
 #include "cli/report.hpp"
 
+#include "couplet/print/print.hpp"
+
 namespace couplet::cli {
 
 void reporter::begin() {
@@ -10,9 +12,7 @@ void reporter::begin() {
 void reporter::statement(const nlohmann::json& r) {
     const std::string kind = r.at("kind");
     if (format_ == "json") {
-        nlohmann::json shown = r;
-        shown.erase("steps_text");  // "steps" carries the same, structured
-        out_ << shown.dump() << "\n";
+        out_ << r.dump() << "\n";
         return;
     }
     if (format_ == "latex") {
@@ -36,9 +36,12 @@ void reporter::statement(const nlohmann::json& r) {
 
 // As comments, so that text output stays valid input and LaTeX still compiles.
 void reporter::steps(const nlohmann::json& r, const char* comment) {
-    if (!r.contains("steps_text")) return;
-    if (r.at("steps_text").empty()) out_ << comment << "(no move or rule applied)\n";
-    for (const auto& line : r.at("steps_text")) out_ << comment << line.get<std::string>() << "\n";
+    if (!r.contains("steps")) return;
+    if (r.at("steps").empty()) out_ << comment << "(no move or rule applied)\n";
+    for (const auto& step : r.at("steps"))
+        for (const std::string& line : trace_step_lines(step.at("rule"), step.at("reference"), step.at("before"),
+                                                        step.at("after")))
+            out_ << comment << line << "\n";
 }
 
 void reporter::end() {

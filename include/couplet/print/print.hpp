@@ -5,6 +5,7 @@
 #include <ginac/ginac.h>
 
 #include <string>
+#include <vector>
 
 namespace couplet {
 
@@ -18,5 +19,10 @@ std::string latex_identifier(const std::string& name);
 // The readable order of names: j < j1 < j2 < j12 < J < J' < l < lambda (letters case-blind,
 // lower case first, subscripts by value, primes last).  Printing and canonical forms use it.
 bool readable_name_less(const std::string& a, const std::string& b);
+
+// One step of a derivation trace as lines of plain text: the rule with its reference, then the
+// printed term before and after.  The one layout of `simplify --steps`, in text and in LaTeX.
+std::vector<std::string> trace_step_lines(const std::string& rule, const std::string& reference,
+                                          const std::string& before, const std::string& after);
 
 }  // namespace couplet
