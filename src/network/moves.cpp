@@ -55,16 +55,16 @@ std::vector<move> build() {
                 all.append(m[r][c]);
                 if (c < 2) first_two_columns.append(m[r][c]);
             }
-        out.push_back({"six_threej_to_ninej", "DLMF 34.6.1",
+        out.push_back({"six 3j to a 9j", "DLMF 34.6.1",
                        {row(0), column(0), row(1), column(1), row(2), column(2)}, 0, all, ninej, lst{}, lst{}});
         // One column left open: by the Wigner-Eckart theorem the 3j of that column times the 9j.
-        out.push_back({"five_threej_to_threej_ninej", "DLMF 34.6.1 with 34.3.16",
+        out.push_back({"five 3j to 3j times 9j", "DLMF 34.6.1 with 34.3.16",
                        {row(0), column(0), row(1), column(1), row(2)}, 0, first_two_columns,
                        column(2) * ninej, lst{}, lst{}});
     }
 
     // The 6j as a closed network of four 3j.
-    out.push_back({"four_threej_to_sixj", "DLMF 34.4.1",
+    out.push_back({"four 3j to a 6j", "DLMF 34.4.1",
                    {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, l2, l3, m1, u2, -u3),
                     wigner3j(l1, j2, l3, -u1, m2, u3), wigner3j(l1, l2, j3, u1, -u2, m3)},
                    l1 + l2 + l3 + u1 + u2 + u3,
@@ -72,7 +72,7 @@ std::vector<move> build() {
                    wigner6j(j1, j2, j3, l1, l2, l3), lst{}, lst{}});
 
     // A triangle with one free line at each corner: the Wigner-Eckart form 3j x 6j.
-    out.push_back({"triangle_to_threej_sixj", "DLMF 34.5.23",
+    out.push_back({"triangle to 3j times 6j", "DLMF 34.5.23",
                    {wigner3j(j1, l2, l3, m1, u2, -u3), wigner3j(l1, j2, l3, -u1, m2, u3),
                     wigner3j(l1, l2, j3, u1, -u2, m3)},
                    l1 + l2 + l3 + u1 + u2 + u3,
@@ -80,7 +80,7 @@ std::vector<move> build() {
                    wigner3j(j1, j2, j3, m1, m2, m3) * wigner6j(j1, j2, j3, l1, l2, l3), lst{}, lst{}});
 
     // Two vertices joined by two lines: 3j orthogonality.
-    out.push_back({"bubble_orthogonality", "DLMF 34.3.16",
+    out.push_back({"bubble to a delta", "DLMF 34.3.16",
                    {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, j2, k3, m1, m2, n3)},
                    0,
                    lst{m1, m2},
@@ -88,7 +88,7 @@ std::vector<move> build() {
 
     // A line from a vertex back to itself: the metric is sqrt(2j+1) times the 3j with a zero
     // entry, and orthogonality closes the loop (DLMF 34.3.16 with 34.3.1's (j j 0) value).
-    out.push_back({"loop_to_delta", "DLMF 34.3.16 with 34.3.1",
+    out.push_back({"loop to a delta", "DLMF 34.3.16 with 34.3.1",
                    {wigner3j(j1, j1, c, m1, -m1, g)},
                    j1 - m1,
                    lst{m1},
@@ -106,7 +106,7 @@ move build_interchange() {
     // The four-leg tensor coupled as (a b) e (c d) expanded in the one coupled as (a c) x (b d):
     // the coefficient is 3j orthogonality (DLMF 34.3.17) applied to the closed four-3j network,
     // a 6j by DLMF 34.4.1 (equivalently DLMF 34.5.23 with 34.3.17).
-    move m{"interchange_recoupling", "DLMF 34.5.23 with 34.3.17",
+    move m{"recoupling interchange", "DLMF 34.5.23 with 34.3.17",
            {wigner3j(a, b, e, al, be, ep), wigner3j(e, c, d, -ep, ga, de)},
            e - ep,
            lst{ep},

@@ -31,7 +31,7 @@ TEST_CASE("a wrong phase in a move's pattern is caught by its self-test", "[netw
     // The triangle with the factor (-1)^(l1+u1) taken away no longer equals 3j x 6j (DLMF 34.5.23
     // needs all three): the self-test can fail.
     for (const auto& m : network::network_moves()) {
-        if (m.name != "triangle_to_threej_sixj") continue;
+        if (m.name != "triangle to 3j times 6j") continue;
         network::move broken = m;
         const auto& q = network::pattern_numbers();
         GiNaC::ex l1 = q.find("l1")->symbol, u1 = q.find("u1")->symbol;
