@@ -191,6 +191,8 @@ printed writer::product(const ex& e) {
         printed bottom;
         if (p.bottom.size() == 1 && p.denominator == 1)
             bottom = write(p.bottom.front());
+        else if (p.bottom.empty())
+            bottom = number(p.denominator);  // a bare integer needs no parentheses: b/2, not b/(2)
         else
             bottom = {join_factors(p.bottom, p.denominator), level::product};
         result = fraction(top, bottom, bottom.binding);

@@ -60,4 +60,7 @@ TEST_CASE("text printing of the language's forms", "[print]") {
     CHECK(show("1/sqrt(2*j+1)") == "1/sqrt(2*j+1)");
     CHECK(show("-3*x/(2*y)") == "-3*x/(2*y)");
     CHECK(show("J'+lambda") == "J'+lambda");
+    // A half entry divides by a bare integer, without parentheses round it.
+    CHECK(show("6j{(a+b)/2, a, b; (d-b)/2, c, d}") == "6j{a/2+b/2, a, b; -b/2+d/2, c, d}");
+    CHECK(show("x/2 + 3*x/(4*y)") == "x/2 + 3*x/(4*y)");
 }
