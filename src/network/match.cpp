@@ -54,21 +54,67 @@ public:
         }
         used_.assign(t.threejs.size(), false);
         chosen_.assign(m.threejs.size(), {-1, -1});
+        count_lines();
     }
 
     std::optional<ex> run() {
         if (move_.threejs.size() > term_.threejs.size() || move_.summed.nops() > term_.lines.size())
             return std::nullopt;
+        // Most moves do not fit most terms; the graph alone says so, without any symbolic work.
+        std::vector<int> image(move_.threejs.size(), -1);
+        if (!embeds(0, image)) return std::nullopt;
         return place(0, exmap{});
     }
 
 private:
+    // Lines between each pair of vertices (a loop counts on the diagonal), of the pattern and of
+    // the term: a pattern line can only land on a term line between the images of its ends.
+    void count_lines() {
+        const std::size_t p = move_.threejs.size(), n = term_.threejs.size();
+        pattern_lines_.assign(p, std::vector<int>(p, 0));
+        for (const ex& s : move_.summed) {
+            std::vector<std::size_t> at;
+            for (std::size_t k = 0; k < p; ++k)
+                for (int c = 3; c < 6; ++c)
+                    if (ex(pattern_entry(move_.threejs[k].op(c)).first).is_equal(s)) at.push_back(k);
+            if (at.size() != 2) continue;
+            ++pattern_lines_[at[0]][at[1]];
+            if (at[0] != at[1]) ++pattern_lines_[at[1]][at[0]];
+        }
+        term_lines_.assign(n, std::vector<int>(n, 0));
+        for (const line& l : term_.lines) {
+            if (l.ends[0] < 0 || l.ends[1] < 0) continue;
+            ++term_lines_[l.ends[0]][l.ends[1]];
+            if (l.ends[0] != l.ends[1]) ++term_lines_[l.ends[1]][l.ends[0]];
+        }
+    }
+
+    // Whether term vertex v can be the image of pattern vertex k, given the images of 0..k-1.
+    bool fits(std::size_t k, std::size_t v, const std::vector<int>& image) const {
+        if (lines_at_[v].size() < summed_slots_[k] || term_lines_[v][v] < pattern_lines_[k][k]) return false;
+        for (std::size_t q = 0; q < k; ++q)
+            if (image[q] == static_cast<int>(v) || term_lines_[v][image[q]] < pattern_lines_[k][q]) return false;
+        return true;
+    }
+
+    bool embeds(std::size_t k, std::vector<int>& image) const {
+        if (k == image.size()) return true;
+        for (std::size_t v = 0; v < term_.threejs.size(); ++v) {
+            if (!fits(k, v, image)) continue;
+            image[k] = static_cast<int>(v);
+            if (embeds(k + 1, image)) return true;
+        }
+        image[k] = -1;
+        return false;
+    }
+
     std::optional<ex> place(std::size_t k, const exmap& binding) {
         if (++visits_ > max_visits || vetoes_ >= max_vetoes) return std::nullopt;
         if (k == move_.threejs.size()) return finish(binding);
+        std::vector<int> image(k);
+        for (std::size_t q = 0; q < k; ++q) image[q] = chosen_[q].first;
         for (std::size_t v = 0; v < term_.threejs.size(); ++v) {
-            if (used_[v] || lines_at_[v].size() < summed_slots_[k] ||
-                !holds_bound_lines(move_.threejs[k], lines_at_[v], binding))
+            if (used_[v] || !fits(k, v, image) || !holds_bound_lines(move_.threejs[k], lines_at_[v], binding))
                 continue;
             used_[v] = true;
             if (orbits_[v].empty()) orbits_[v] = symmetry::threej_orbit(term_.threejs[v]);
@@ -362,6 +408,7 @@ private:
     std::vector<std::size_t> summed_slots_;
     std::vector<bool> used_;
     std::vector<std::pair<int, int>> chosen_;
+    std::vector<std::vector<int>> pattern_lines_, term_lines_;
     long visits_ = 0;
     int vetoes_ = 0;
     // The search is bounded: a vetoed result is usually vetoed in every arrangement.
