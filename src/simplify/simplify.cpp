@@ -28,7 +28,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     GiNaC::ex x = normalize(e);
     x = symmetry::canonicalize_symbols(x, numbers);
     std::vector<network::reduction_step> completeness;
-    GiNaC::ex before_completeness = x;
+    GiNaC::ex before_completeness = merge_phases(x);  // as the trace prints it
     x = network::reduce_completeness(x, numbers, &completeness);
     record_network_steps(completeness, before_completeness, x);
     check_expansion(x);
