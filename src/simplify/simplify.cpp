@@ -6,6 +6,7 @@
 #include "couplet/run_limits.hpp"
 #include "couplet/rules/engine.hpp"
 #include "couplet/symmetry/symmetries.hpp"
+#include "simplify/nest_sums.hpp"
 #include "simplify/phase_reduction.hpp"
 
 namespace couplet {
@@ -31,6 +32,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     GiNaC::ex before_completeness = merge_phases(x);  // as the trace prints it
     x = network::reduce_completeness(x, numbers, &completeness);
     record_network_steps(completeness, before_completeness, x);
+    x = nest_projection_sums(x, numbers);
     check_expansion(x);
     x = merge_phases(x.expand());
     check_deadline();
