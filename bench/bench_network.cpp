@@ -1,7 +1,8 @@
 // Figures for the m-sum stage: for each network of the acceptance corpus and for random proper
 // networks of 6 to 30 vertices, the time to simplify (the network stage alone, and the whole
 // pipeline with the j-sum rules), the number of summation indices and of 6j factors in the
-// result, and whether an m-sum is left.  Prints a table; asserts nothing.
+// result, how many cuts the network stage separated on, and whether an m-sum is left.
+// Prints a table; asserts nothing.
 // Usage: bench_network [RANDOM_PER_SIZE]   (default 3)
 #include <ctime>
 #include <cstdio>
@@ -10,6 +11,7 @@
 
 #include "couplet/model/lower.hpp"
 #include "couplet/model/normalize.hpp"
+#include "couplet/network/cut.hpp"
 #include "couplet/network/reduce.hpp"
 #include "couplet/simplify.hpp"
 #include "couplet/symmetry/symmetries.hpp"
@@ -41,21 +43,25 @@ void row(const std::string& name, const std::string& text) {
     GiNaC::ex input = program.statements.back().value;
     auto t0 = std::clock();
     GiNaC::ex x = merge_phases(symmetry::canonicalize_symbols(normalize(input), program.numbers).expand());
-    GiNaC::ex reduced = network::reduce_msums(x, program.numbers);
+    std::vector<network::reduction_step> steps;
+    GiNaC::ex reduced = network::reduce_msums(x, program.numbers, &steps);
     double network_ms = ms_since(t0);
+    int cuts = 0;
+    for (const auto& s : steps) cuts += s.reference == network::cut_reference;
     auto t1 = std::clock();
     GiNaC::ex out = simplify_expression(input, program.numbers);
     double total_ms = ms_since(t1);
     counts after_network = count(reduced), after = count(out);
-    std::printf("%-50s %9.1f %9.1f %5d/%-3d %5d/%-3d %s\n", name.c_str(), network_ms, total_ms, after_network.indices,
-                after.indices, after_network.sixj, after.sixj, testing::msum_indices_in(out) > 0 ? "yes" : "no");
+    std::printf("%-50s %9.1f %9.1f %5d/%-3d %5d/%-3d %4d %s\n", name.c_str(), network_ms, total_ms,
+                after_network.indices, after.indices, after_network.sixj, after.sixj, cuts,
+                testing::msum_indices_in(out) > 0 ? "yes" : "no");
 }
 
 }  // namespace
 
 int main(int argc, char** argv) {
     const int per_size = argc > 1 ? std::atoi(argv[1]) : 3;
-    std::printf("%-50s %9s %9s %9s %9s %s\n", "case", "net ms", "all ms", "sums", "6j", "m-sum left");
+    std::printf("%-50s %9s %9s %9s %9s %4s %s\n", "case", "net ms", "all ms", "sums", "6j", "cuts", "m-sum left");
     std::printf("%-50s %9s %9s %9s %9s\n", "", "", "", "net/all", "net/all");
     for (const auto& g : testing::network_corpus()) row(g.name, testing::graph_network_text(g.vertices, g.edges, g.open, 5));
     std::mt19937 rng(2027);

@@ -5,6 +5,7 @@
 #include "couplet/model/fresh_index.hpp"
 #include "couplet/model/normalize.hpp"
 #include "couplet/model/symbols.hpp"
+#include "couplet/network/cut.hpp"
 #include "couplet/network/fixed_projection.hpp"
 #include "couplet/network/match.hpp"
 #include "couplet/network/term.hpp"
@@ -87,6 +88,41 @@ std::vector<cycle> shortest_cycles(const msum_term& t) {
 
 ex bare(const ex& e) { return is_a<symbol>(e) ? e : (-e).expand(); }
 
+bool sits_in_threej(const ex& e, const ex& index) {
+    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it)
+        if (kind_of(*it) == symbol_kind::threej && it->has(index)) return true;
+    return false;
+}
+
+// sum(m : delta(+-m, x) f(m)) = f(+-x) where a 3j still holds m: that 3j vanishes wherever x
+// lies outside m's range or parity, as the sum would be empty.  A move's result can leave such a
+// delta on a negated projection, which no network analysis accepts.
+std::optional<std::pair<ex, lst>> resolve_projection_delta(const ex& body, const lst& indices) {
+    if (!is_a<mul>(body)) return std::nullopt;
+    exvector factors(body.begin(), body.end());
+    for (std::size_t k = 0; k < factors.size(); ++k) {
+        if (kind_of(factors[k]) != symbol_kind::delta) continue;
+        for (int side = 0; side < 2; ++side) {
+            const ex &entry = factors[k].op(side), &other = factors[k].op(1 - side);
+            for (const ex& i : indices) {
+                int sign = (entry - i).expand().is_zero() ? 1 : (entry + i).expand().is_zero() ? -1 : 0;
+                if (sign == 0 || other.has(i)) continue;
+                ex rest = 1;
+                for (std::size_t q = 0; q < factors.size(); ++q)
+                    if (q != k) rest *= factors[q];
+                if (!sits_in_threej(rest, i)) continue;
+                lst kept;
+                for (const ex& x : indices)
+                    if (!x.is_equal(i)) kept.append(x);
+                return std::make_pair(rest.subs(i == (sign * other).expand()), kept);
+            }
+        }
+    }
+    return std::nullopt;
+}
+
+constexpr const char* projection_delta_reference = "definition of the Kronecker delta, common practice, no source";
+
 class reducer : public map_function {
 public:
     reducer(const quantum_numbers& numbers, std::vector<reduction_step>* steps) : numbers_(numbers), steps_(steps) {
@@ -117,6 +153,17 @@ private:
     ex reduce_term(ex body, lst indices) {
         bool changed = false;
         for (int round = 0; round < max_moves_per_term; ++round) {
+            if (auto d = resolve_projection_delta(body, indices)) {
+                ex n = merge_phases(d->second.nops() ? make_sum(d->first, d->second) : d->first);
+                if (phases_provable_(n)) {
+                    if (steps_) steps_->push_back({"delta on a summed projection", projection_delta_reference});
+                    changed = true;
+                    if (!is_a<index_sum>(n)) return tidy(n);
+                    body = ex_to<index_sum>(n).body();
+                    indices = ex_to<index_sum>(n).indices();
+                    continue;
+                }
+            }
             term_analysis a = analyze_term(body, indices, numbers_);
             if (!a.term) break;
             std::optional<ex> next;
@@ -127,6 +174,9 @@ private:
                     break;
                 }
             }
+            // A cut adds no sum and leaves two independent smaller networks: before any interchange.
+            if (!next)
+                if (auto separated = separate_on_a_cut(*a.term, body)) return *separated;
             // Only on a proper network: elsewhere the closing moves cannot finish what it starts.
             if (!next && interchanges_ < max_interchanges && is_proper_network(*a.term)) {
                 next = interchange_on_a_shortest_cycle(*a.term, body);
@@ -153,6 +203,33 @@ private:
         }
         ex out = make_sum(body, indices);
         return changed ? tidy(out) : out;
+    }
+
+    // The first cut of two lines, else of three, that separates with provable phases; each
+    // closed part is reduced on its own, the other part kept from capture.
+    std::optional<ex> separate_on_a_cut(const msum_term& t, const ex& body) {
+        ex context = body;
+        for (const ex& o : outer_) context *= o;
+        std::vector<symbol> fresh;
+        for (int k = 0; k < 3; ++k) {
+            ex taken = context;
+            for (const symbol& f : fresh) taken *= f;
+            fresh.push_back(fresh_index(taken, numbers_));
+        }
+        for (int size : {2, 3}) {
+            for (const line_cut& c : find_cuts(t, size)) {
+                auto s = separate(t, c, fresh);
+                if (!s || !phases_provable_(joined(*s))) continue;
+                if (steps_) steps_->push_back({s->name, cut_reference});
+                outer_.push_back(make_sum(s->body_b, s->indices_b));
+                ex a = reduce_term(s->body_a, s->indices_a);
+                outer_.back() = a;
+                ex b = reduce_term(s->body_b, s->indices_b);
+                outer_.pop_back();
+                return tidy(s->factor * a * b);
+            }
+        }
+        return std::nullopt;
     }
 
     // Recoupling on a line of a shortest cycle, pairing the cycle's two neighbouring lines on

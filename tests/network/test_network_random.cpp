@@ -15,9 +15,8 @@ TEST_CASE("random networks of 2 to 10 vertices reduce without a single mismatch"
     // Common practice, no source: an identity holds when both sides agree exactly at every
     // sampled admissible point; the input side is the defining sum, enumerated.  Every other
     // network is a proper Yutsis network (each line with its metric), which the moves must
-    // reduce completely (not yet reached: a phase the veto cannot prove still stops a few, so
-    // the bound below is a floor to raise); the others may keep lines no move fits, but never a
-    // wrong value.
+    // reduce completely (not yet reached: a few still keep an m-sum, so the bound below is a
+    // floor to raise); the others may keep lines no move fits, but never a wrong value.
     std::mt19937 rng(2026);
     int networks = 0, closed = 0, partly = 0, unreduced = 0, mismatches = 0, points = 0, nonzero = 0;
     int proper = 0, proper_with_msum = 0;
@@ -47,8 +46,9 @@ TEST_CASE("random networks of 2 to 10 vertices reduce without a single mismatch"
               << " proper ones with an m-sum left), " << points << " points (" << nonzero << " nonzero), "
               << mismatches << " mismatches\n";
     CHECK(mismatches == 0);
-    // Not every proper network is reduced to the end yet (54-63 of 250 keep an m-sum, the
-    // count varying with GiNaC's term order); this guards against a regression, not a goal.
-    CHECK(proper_with_msum * 3 <= proper);
+    // Not every proper network is reduced to the end yet (1-4 of 250 keep an m-sum, the count
+    // varying with GiNaC's term order; 54-63 before deltas on negated projections were resolved
+    // and cuts separated); this guards against a regression, not a goal.
+    CHECK(proper_with_msum * 25 <= proper);
     CHECK(nonzero >= points / 10);  // the points test something
 }
