@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <map>
 #include <set>
+#include <tuple>
 
 #include "couplet/model/fresh_index.hpp"
 #include "couplet/model/normalize.hpp"
@@ -30,6 +31,25 @@ ex product_of(const std::vector<ex>& factors) {
     ex out = 1;
     for (const ex& f : factors) out *= f;
     return out;
+}
+
+// The leading part of the termination order (engine.hpp): summation indices, 9j, 6j, in that
+// order of importance; for choosing between look-aheads.
+struct factor_count {
+    size_t indices = 0, ninej = 0, sixj = 0;
+    bool operator<(const factor_count& o) const {
+        return std::tie(indices, ninej, sixj) < std::tie(o.indices, o.ninej, o.sixj);
+    }
+};
+
+factor_count count_factors(const ex& e) {
+    factor_count c;
+    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
+        if (is_a<index_sum>(*it)) c.indices += ex_to<index_sum>(*it).indices().nops();
+        if (kind_of(*it) == symbol_kind::ninej) ++c.ninej;
+        if (kind_of(*it) == symbol_kind::sixj) ++c.sixj;
+    }
+    return c;
 }
 
 // Rebuilds e with `target` replaced by `replacement`, also inside sums (whose own subs keeps
@@ -363,8 +383,18 @@ private:
     // A 9j that involves the summation index y, expanded by DLMF 34.6.2 (in whichever of its 72
     // arrangements) only when a sum rule on y then fires: the expansion alone would undo the
     // recognition rule.  The pair lowers the number of 9j at an unchanged number of indices.
+    // Different arrangements can let different rules fire (a 9j with repeated entries may admit
+    // orthogonality over y in one and the Racah sum rule in another), and the locally larger
+    // step can lead into a dead end; so every distinct outcome is reduced to the end on the side
+    // and the one that ends lowest in the termination order is taken.  Each look-ahead runs on a
+    // term already lower in that order than this one, so the look-aheads are well founded.
     std::optional<ex> expand_ninej_for(const ex& term, const std::vector<ex>& outside, const index_sum& s,
                                        const ex& body, const symbol& y) {
+        struct outcome {
+            ex candidate, fired;
+            std::vector<rule_step> steps;
+        };
+        std::vector<outcome> outcomes;
         std::vector<ex> factors = factors_of(body);
         for (size_t k = 0; k < factors.size(); ++k) {
             if (kind_of(factors[k]) != symbol_kind::ninej || !factors[k].has(y)) continue;
@@ -383,12 +413,28 @@ private:
                 engine probe(numbers_);
                 auto fired = probe.rule_on_index(candidate, y);
                 if (!fired) continue;
-                record("9j expanded as a sum of three 6j", "DLMF 34.6.2", term, candidate);
-                trace.insert(trace.end(), probe.trace.begin(), probe.trace.end());
-                return fired;
+                ex shape = symmetry::canonicalize_symbols(*fired, numbers_);
+                bool seen = std::any_of(outcomes.begin(), outcomes.end(), [&](const outcome& o) {
+                    return symmetry::canonicalize_symbols(o.fired, numbers_).is_equal(shape);
+                });
+                if (seen) continue;
+                outcomes.push_back({candidate, *fired, probe.trace});
             }
         }
-        return std::nullopt;
+        if (outcomes.empty()) return std::nullopt;
+        size_t best = 0;
+        if (outcomes.size() > 1) {
+            std::vector<factor_count> ends;
+            for (const outcome& o : outcomes) {
+                engine ahead(numbers_);
+                ends.push_back(count_factors(ahead.run(o.fired)));
+            }
+            best = static_cast<size_t>(std::min_element(ends.begin(), ends.end()) - ends.begin());
+        }
+        const outcome& chosen = outcomes[best];
+        record("9j expanded as a sum of three 6j", "DLMF 34.6.2", term, chosen.candidate);
+        trace.insert(trace.end(), chosen.steps.begin(), chosen.steps.end());
+        return chosen.fired;
     }
 
     // Only the single-index sum rules on y, for the expansion probe.

@@ -243,3 +243,41 @@ TEST_CASE("chain: a 9j summed over a corner is expanded, then the Racah sum rule
     CHECK(count_of(applied, "Racah sum rule") == 1);
     CHECK(count_of(applied, "6j orthogonality") == 1);
 }
+
+TEST_CASE("chain: a 9j expanded so that the Racah sum rule fires on two of its 6j gives one 6j", "[rules][cli]") {
+    // sum(z, e : (-1)^(z+f+h) (2z+1)(2e+1) 9j{z b c; c e f; b h i} 6j{c e f; b y h})
+    //   = (-1)^(2y) tri(b, f, y) tri(c, h, y) 6j{b i h; c y f}, derived by hand:
+    // DLMF 34.6.2 backwards expands the 9j as sum(x : (-1)^(2x) (2x+1) 6j{z b c; f i x}
+    // 6j{c e f; b x h} 6j{b h i; x z c}); the corner z stands in the first and third, which
+    // DLMF 34.5.15 over z turns into 6j{b i h; c x f}; DLMF 34.5.14 over e (the second 6j against
+    // the outside one) gives delta(x, y) tri(b, f, y) tri(c, h, y)/(2y+1), and the delta collapses
+    // the expansion's sum.  The repeated b and c also admit DLMF 34.5.14 over z in another
+    // arrangement of the 9j, a dead end the engine must not take.  Written disguised: the 9j
+    // transposed and then two rows swapped (common practice, no source: the phase of all nine),
+    // indices u and w, the 6j's columns permuted and two of them flipped, the phase split into
+    // factors that are integers at admissible points and padded with (-1)^(4u).
+    const std::string input =
+        "sum(u, w : (-1)^(u+b+c+2*h) * (2*w+1) * 9j{u, c, b; c, f, i; b, w, h} * (-1)^(5*u+b+w+f)"
+        " * 6j{f, y, b; h, w, c} * (-1)^(i+f+c) * (2*u+1))";
+    auto s = simplify_and_compare("", input);
+    require_exact(s);
+    INFO(s.text);
+    CHECK(count_of(s.text, "sum(") == 0);
+    CHECK(count_of(s.text, "9j") == 0);
+    CHECK(count_of(s.text, "6j") == 1);
+    // The command line's own exact check of its result.
+    auto json = couplet::testing::run_cli({"simplify", "-e", input, "--format", "json"});
+    INFO(json.out << json.err);
+    CHECK(json.code == 0);
+    CHECK(count_of(json.out, "\"verified\":true") == 1);
+    std::string applied = couplet::testing::rules_applied(input);
+    INFO(applied);
+    CHECK(count_of(applied, "9j expanded as a sum of three 6j") == 1);
+    CHECK(count_of(applied, "Racah sum rule") == 1);
+    CHECK(applied.find("9j expanded as a sum of three 6j\n") < applied.find("Racah sum rule\n"));
+    // The steps the command line prints carry their references.
+    auto steps = couplet::testing::run_cli({"simplify", "-e", input, "--steps", "--no-verify"});
+    CHECK(count_of(steps.out, "9j expanded as a sum of three 6j (DLMF 34.6.2)") == 1);
+    CHECK(count_of(steps.out, "Racah sum rule (DLMF 34.5.15)") == 1);
+    CHECK(count_of(steps.out, "6j orthogonality (DLMF 34.5.14)") == 1);
+}

@@ -5,7 +5,9 @@
 // indices, number of 9j, number of 6j, the multiset of symbol occurrences ranked by the readable
 // order).  Sum rules and delta collapse remove an index; a 9j is expanded (DLMF 34.6.2) only
 // together with a sum rule on another index that then fires, which keeps the indices and
-// removes the 9j; the zero-argument rules remove a 6j or a 9j; a vanishing term drops out; delta
+// removes the 9j (when several arrangements of the 9j let a rule fire, each outcome is reduced to
+// the end on the side, on a term already lower in the order, and the lowest end is taken); the
+// zero-argument rules remove a 6j or a 9j; a vanishing term drops out; delta
 // elimination replaces a symbol by one earlier in the readable order.  Splitting or merging
 // sums (also sums whose indices are renamed to agree) is done only together with a rule that
 // fires.  Roots are split into roots of their factors before each step (idempotent, so no
