@@ -27,19 +27,19 @@ assignment values_of(const lowered_statement& s) {
     return at;
 }
 
-ex run_simplifier(const ex& e, const lowered_program& program, const execute_options& options) {
-    ex result = options.simplifier ? options.simplifier(e, program.numbers) : simplify_expression(e, program.numbers);
+ex run_simplifier(const ex& e, const quantum_numbers& numbers, const execute_options& options) {
+    ex result = options.simplifier ? options.simplifier(e, numbers) : simplify_expression(e, numbers);
     // The CG form is applied before verification, so that what is printed is what was checked.
     if (options.prefer_clebsch)
-        result = merge_phases(reduce_phases(merge_phases(symmetry::prefer_clebsch(result)), program.numbers));
+        result = merge_phases(reduce_phases(merge_phases(symmetry::prefer_clebsch(result)), numbers));
     return result;
 }
 
 // A result is printed only once it agrees with the input at every sample point; a
 // disagreement is couplet's own bug, so the input is shown unsimplified and the run fails.
-outcome simplify(const lowered_statement& s, const lowered_program& program, const execute_options& options) {
+outcome simplify(const lowered_statement& s, const quantum_numbers& numbers, const execute_options& options) {
     auto started = std::chrono::steady_clock::now();
-    ex result = run_simplifier(s.value, program, options);
+    ex result = run_simplifier(s.value, numbers, options);
     verify::verification_budget budget;
     if (options.limit_verification_time) budget = verify::matching_budget(std::chrono::steady_clock::now() - started);
     json record{{"kind", "simplify"}, {"input", s.text}, {"result", to_text(result)},
@@ -55,7 +55,7 @@ outcome simplify(const lowered_statement& s, const lowered_program& program, con
     if (!options.verify_simplify) return {record};
     verify::simplification_check v;
     try {
-        v = verify::verify_simplification(s.value, result, program.numbers, options.sampling, options.progress, budget);
+        v = verify::verify_simplification(s.value, result, numbers, options.sampling, options.progress, budget);
     } catch (const evaluation_error& e) {
         throw user_error(s.span.begin, std::string("cannot verify the simplification: ") + e.what() +
                                            " (--no-verify prints it unverified)");
@@ -85,8 +85,8 @@ outcome simplify(const lowered_statement& s, const lowered_program& program, con
     return o;
 }
 
-outcome evaluate(const lowered_statement& s, const lowered_program& program) {
-    evaluator eval(program.numbers);
+outcome evaluate(const lowered_statement& s, const quantum_numbers& numbers) {
+    evaluator eval(numbers);
     exact::number value;
     try {
         value = eval(s.value, values_of(s));
@@ -102,7 +102,7 @@ outcome evaluate(const lowered_statement& s, const lowered_program& program) {
 // Decided by exact evaluation at sample points (and symbolically when the simplifier reduces
 // the difference to 0); a failure is diagnosed as a missing phase, a missing factor, or a
 // counterexample.
-outcome check(const lowered_statement& s, const lowered_program& program, const execute_options& options) {
+outcome check(const lowered_statement& s, const quantum_numbers& numbers, const execute_options& options) {
     json record{{"kind", "check"}, {"input", s.text}, {"latex", to_latex(s.value) + " = " + to_latex(s.rhs)}};
     verify::check_options o;
     o.sampling = options.sampling;
@@ -110,7 +110,7 @@ outcome check(const lowered_statement& s, const lowered_program& program, const 
     o.simplifier = options.simplifier;
     verify::check_report r;
     try {
-        r = verify::check_identity(s.value, s.rhs, program.numbers, o);
+        r = verify::check_identity(s.value, s.rhs, numbers, o);
     } catch (const evaluation_error& e) {
         throw user_error(s.span.begin, std::string("cannot decide this check: ") + e.what());
     }
@@ -136,12 +136,16 @@ outcome check(const lowered_statement& s, const lowered_program& program, const 
 
 outcome execute(const lowered_statement& s, const lowered_program& program, bare_meaning bare,
                 const execute_options& options) {
+    // Which j a projection belongs to is read from this statement alone: the phase algebra must
+    // not borrow a pairing that another line of the program made.
+    const quantum_numbers numbers =
+        program.numbers.for_statement(s.kind == request_kind::check ? ex(GiNaC::lst{s.value, s.rhs}) : s.value);
     switch (s.kind) {
         case request_kind::simplify:
-            if (s.bare && bare == bare_meaning::eval) return evaluate(s, program);
-            return simplify(s, program, options);
-        case request_kind::eval: return evaluate(s, program);
-        case request_kind::check: return check(s, program, options);
+            if (s.bare && bare == bare_meaning::eval) return evaluate(s, numbers);
+            return simplify(s, numbers, options);
+        case request_kind::eval: return evaluate(s, numbers);
+        case request_kind::check: return check(s, numbers, options);
         default: return {json()};
     }
 }

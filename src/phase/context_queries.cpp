@@ -1,6 +1,7 @@
 // The queries of a phase context: integrality, equality and canonical forms.
 #include "couplet/phase/context.hpp"
 
+#include "couplet/phase/bounded_projections.hpp"
 #include "couplet/phase/phase_lattice.hpp"
 #include "couplet/phase/phase_level.hpp"
 #include "couplet/phase/representative_search.hpp"
@@ -66,6 +67,15 @@ const detail::phase_lattice& context::lattice() const {
         if (auto c = doubled_row(f, false, index_)) rows.push_back(std::move(*c));
     for (const auto& f : zero_forms_)
         if (auto c = doubled_row(f, true, index_)) rows.push_back(std::move(*c));
+    std::vector<detail::bounded_coordinate> bounded;
+    for (std::size_t i = 0; i < names_.size(); ++i) {
+        const linear_form& owner = info_[i].owner;
+        if (!info_[i].projection || !owner.is_constant()) continue;
+        const cln::cl_RA twice = 2 * owner.constant();
+        if (cln::denominator(twice) == 1 && !cln::minusp(twice) && twice <= detail::largest_enumerated_box)
+            bounded.push_back({i, detail::to_int64(cln::numerator(twice))});
+    }
+    for (auto& c : detail::bound_constraints(names_.size(), rows, bounded)) rows.push_back(std::move(c));
     detail::witness_geometry geometry;
     for (std::size_t i = 0; i < names_.size(); ++i) {
         if (info_[i].projection)

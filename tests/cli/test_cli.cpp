@@ -91,3 +91,12 @@ TEST_CASE("the bundled examples run", "[cli][examples]") {
         CHECK(!r.out.empty());
     }
 }
+
+TEST_CASE("each statement of a program pairs its projections by its own columns", "[cli]") {
+    // Line 1 makes c - M an integer, which says nothing about line 2, where M is a projection
+    // of a and the phase (-1)^(2c+2M) is (-1)^(2c+2a).  Borrowing line 1's pairing reduced the
+    // phase to 1 and the self-check caught it (exit 3).
+    auto r = run_cli({"simplify", "-"}, "3j(c, c, 0; M, -M, 0)\n(-1)^(2*c+2*M)*3j(a, b, l; M, -M, 0)\n");
+    CHECK(r.code == 0);
+    CHECK(r.out == "3j(c, c, 0; M, -M, 0)\n(-1)^(2*a+2*c)*3j(a, b, l; M, -M, 0)\n");
+}

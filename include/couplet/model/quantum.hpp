@@ -45,6 +45,14 @@ public:
     // In order of first appearance: the order printers and the phase algebra use.
     const std::vector<quantum_number>& all() const { return numbers_; }
 
+    // The table as one statement sees it.  Names, symbols, roles and parities belong to the
+    // program; which j a projection belongs to does not: statements are independent, and
+    // 3j(c, c, 0; M, -M, 0) on one line says nothing about M on the next.  Each projection's
+    // owner is therefore taken from the statement's own columns (j, +-m + constant, both outside
+    // every sum over their names): the program's owner when the statement pairs m with it too,
+    // else the first such column, and none when the statement has no such column.
+    quantum_numbers for_statement(const GiNaC::ex& statement) const;
+
 private:
     quantum_number& entry(const GiNaC::symbol& s);
     std::vector<quantum_number> numbers_;

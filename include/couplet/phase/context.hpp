@@ -7,12 +7,14 @@
 // Inequalities (triangles, |m| <= j, j >= 0) are ignored: every parity pattern allowed by the
 // congruences and equations is realized by large enough values, so they cannot change a verdict.
 //
-// That premise fails only where inequalities pin a value that cannot grow: a triad
-// (1/2, 1/2, b+1) forces b = 0, an m-sum m4 + 2 m3 = 0 with m4 a projection of 1 forces m3 = 0.
-// "equal" and "integer" are always sound (the lattice contains every admissible point); in
-// such schemes "not_equal" / "not_integer" may be answered where the pinned values would agree,
-// and the witness then breaks an inequality.  A caller who knows the pinned value can state it
-// with add_zero.
+// That premise fails where inequalities pin a value that cannot grow.  The bound of a projection
+// of a constant (|m| <= J) is taken into account: its 2J+1 values are enumerated against the
+// equations (bounded_projections.hpp), so an m-sum m4 + 2 m3 = 0 with m4 a projection of 1 does
+// force m3 = 0 here.  Other pins are not seen: a triad (1/2, 1/2, b+1) forces b = 0.  "equal"
+// and "integer" are always sound (the lattice contains every admissible point); in such schemes
+// "not_equal" / "not_integer" may be answered where the pinned values would agree, and the
+// witness then breaks an inequality.  A caller who knows the pinned value can state it with
+// add_zero.
 //
 // Queries are const but fill caches (not thread-safe; GiNaC is single-threaded anyway).  Copies
 // share the caches until one of them is changed.
@@ -79,8 +81,9 @@ public:
     // std::invalid_argument.
     void declare_angular(const std::string& name, parity p = parity::unknown);
     // m is a projection of the angular momentum `owner` (a linear form such as j or j+1/2):
-    // owner - m is an integer.  Undeclared names inside `owner` become angular momenta of unknown
-    // parity.  Throws std::invalid_argument when `name` is already declared.
+    // owner - m is an integer, and for a constant owner J also |m| <= J.  Undeclared names inside
+    // `owner` become angular momenta of unknown parity.  Throws std::invalid_argument when `name`
+    // is already declared.
     void declare_projection(const std::string& name, const linear_form& owner);
 
     // The slots of a 3j top row, of each 6j/9j triad, or any other coupled triple: a+b+c is an

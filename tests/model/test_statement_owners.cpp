@@ -1,0 +1,61 @@
+// Which j a projection belongs to is a fact of one statement, not of the program: the phase
+// reduction of one statement must not borrow the pairing another statement made.
+#include <catch2/catch.hpp>
+
+#include "couplet/eval/evaluate.hpp"
+#include "simplify/phase_reduction.hpp"
+#include "support.hpp"
+
+using namespace couplet;
+using GiNaC::ex;
+using GiNaC::numeric;
+
+namespace {
+
+GiNaC::symbol named(const quantum_numbers& numbers, const std::string& name) {
+    const quantum_number* q = numbers.find(name);
+    REQUIRE(q != nullptr);
+    return q->symbol;
+}
+
+// The statement and its phase-reduced form at one point, exactly.
+void check_reduction_at(const std::string& program, const std::vector<std::pair<std::string, numeric>>& point) {
+    const lowered_program p = testing::lower_text(program);
+    const ex statement = p.statements.back().value;
+    const quantum_numbers numbers = p.numbers.for_statement(statement);
+    const ex reduced = reduce_phases(statement, numbers);
+    assignment at;
+    for (const auto& [name, value] : point) at[named(p.numbers, name)] = value;
+    const evaluator eval(numbers);
+    INFO(program);
+    CHECK(eval(reduced, at) == eval(statement, at));
+}
+
+}  // namespace
+
+TEST_CASE("a projection's j in one statement does not pair it in the next", "[model][phase]") {
+    // Line 2 alone: c is any quantum number, so (-1)^(2c) is -1 at c = 1/2 (the j - m of its
+    // own 3j holds: a - M = 0, b + M = 2); line 1's pairing of M with c would make it 1.
+    check_reduction_at("3j(c, c, 0; M, -M, 0)\n(-1)^(2*c+2*M)*3j(a, b, l; M, -M, 0)",
+                       {{"c", numeric(1, 2)}, {"a", 0}, {"b", 2}, {"l", 2}, {"M", 0}});
+    // M stands in no column of line 2 at all.
+    check_reduction_at("3j(c, c, 0; M, -M, 0)\n(-1)^(2*c-2*M)", {{"c", numeric(1, 2)}, {"M", -2}});
+    // The statement the generated LaTeX document met.
+    check_reduction_at("<c (M+1), j12 3 | (j12) 3/2>\n(-1)^(2*j12+2*c)*(-3j(j12-1, j12, l+1/2; -ma, mb+1, M))",
+                       {{"c", numeric(1, 2)}, {"j12", 1}, {"l", numeric(1, 2)}, {"mb", -1}, {"ma", 0}, {"M", 0}});
+}
+
+TEST_CASE("a statement keeps the pairing its own columns make", "[model][phase]") {
+    const lowered_program p = testing::lower_text("3j(a, b, c; m1, m2, m3)*sum(x : 3j(d, d, 0; x, -x, 0))\n"
+                                                  "(-1)^(d-m1)*3j(d, e, f; 2*m1, -2*m1, 0)");
+    const GiNaC::symbol a = named(p.numbers, "a"), m1 = named(p.numbers, "m1"), x = named(p.numbers, "x");
+    REQUIRE(p.numbers.at(m1).owner);
+    const quantum_numbers first = p.numbers.for_statement(p.statements[0].value);
+    REQUIRE(first.at(m1).owner);
+    CHECK((*first.at(m1).owner - a).expand().is_zero());
+    // A bound index has no owner among the free columns.
+    CHECK(!first.at(x).owner);
+    // A column 2*m1 says d - 2 m1 is an integer, not d - m1: only the plain column counts.
+    const quantum_numbers second = p.numbers.for_statement(p.statements[1].value);
+    CHECK(!second.at(m1).owner);
+}
