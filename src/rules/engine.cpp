@@ -193,11 +193,22 @@ private:
     }
 
     // The coupling structure of a summand (its first term without the polynomial factors).
+    // The polynomial factors are dropped before anything is expanded: expanding the whole
+    // summand would multiply out its (2x+1) weights, 2^n copies of everything else, and descend
+    // into every inner sum (minutes on the nested sums a 30-vertex network leaves).
     static ex summand_structure(const ex& body) {
         ex structure = 1;
-        for (const ex& f : factors_of(terms_of(body.expand()).front()))
+        for (const ex& f : factors_of(body))
             if (!is_polynomial_factor(f)) structure *= f;
-        return structure;
+        if (!is_a<add>(structure)) {
+            bool has_add_factor = false;
+            for (const ex& f : factors_of(structure)) has_add_factor = has_add_factor || is_a<add>(f);
+            if (!has_add_factor) return structure;
+        }
+        ex first = 1;
+        for (const ex& f : factors_of(terms_of(structure.expand()).front()))
+            if (!is_polynomial_factor(f)) first *= f;
+        return first;
     }
 
     // The summand of s with its indices renamed to `target`, in an order that captures no name

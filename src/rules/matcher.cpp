@@ -49,6 +49,9 @@ std::optional<summand_parts> split(const std::vector<symbol>& xs, const std::vec
     summand_parts out;
     out.weights.assign(xs.size(), 0);
     auto weight_of = [&](const ex& base) -> int* {
+        // Only a polynomial can be 2x+1; expanding a nested sum or a symbol to find out costs
+        // as much as the whole term (minutes on a reduced network of 30 vertices).
+        if (!base.info(GiNaC::info_flags::polynomial)) return nullptr;
         for (size_t k = 0; k < xs.size(); ++k)
             if (same(base, 2 * xs[k] + 1)) return &out.weights[k];
         return nullptr;
