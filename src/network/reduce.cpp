@@ -192,7 +192,7 @@ private:
                 // Last resort, since it leaves entries the moves do not match.
                 next = fix_projection_by_vertex(*a.term);
                 if (next && !phases_provable_(*next)) next.reset();
-                if (next && steps_) steps_->push_back({"fixed_projection", fixed_projection_reference});
+                if (next && steps_) steps_->push_back({fixed_projection_name, fixed_projection_reference});
             }
             if (!next) break;
             changed = true;
