@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <optional>
 
+#include "couplet/model/same_value.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/symmetry/symmetries.hpp"
 
@@ -15,7 +16,6 @@ namespace {
 const char* const completeness_name = "3j completeness";
 const char* const completeness_reference = "DLMF 34.3.17";
 
-bool is_same(const ex& a, const ex& b) { return (a - b).expand().is_zero(); }
 
 // The summand split into its (-1) exponent, the 3j that hold J or M, and the rest.
 struct split_summand {
@@ -73,7 +73,7 @@ bool projection_of(const ex& entry, const ex& angular, const quantum_numbers& nu
     ex name = is_a<symbol>(entry) ? entry : (-entry).expand();
     if (!is_a<symbol>(name) || std::find(bound.begin(), bound.end(), name) != bound.end()) return false;
     const quantum_number* q = numbers.find(ex_to<symbol>(name));
-    return q && q->role == qn_role::projection && q->owner && is_same(*q->owner, angular);
+    return q && q->role == qn_role::projection && q->owner && same_value(*q->owner, angular);
 }
 
 // (-1)^exponent over the support of 3j(j1, j2, J; m1, m2, M): M is -(m1+m2) there, and an even
@@ -106,7 +106,7 @@ std::optional<ex> apply(const ex& body, const symbol& j, const symbol& m, const 
     for (const auto& a : with_last_column(parts->threejs[0], j, m))
         for (const auto& b : with_last_column(parts->threejs[1], j, m)) {
             const ex &x = a.symbol, &y = b.symbol;
-            if (!is_same(x.op(0), y.op(0)) || !is_same(x.op(1), y.op(1))) continue;
+            if (!same_value(x.op(0), y.op(0)) || !same_value(x.op(1), y.op(1))) continue;
             bool ranged = true;
             for (int c : {0, 1}) ranged = ranged && projection_of(x.op(3 + c), x.op(c), numbers, bound) &&
                                            projection_of(y.op(3 + c), y.op(c), numbers, bound);

@@ -4,6 +4,7 @@
 #include <array>
 #include <numeric>
 
+#include "couplet/model/same_value.hpp"
 #include "couplet/model/symbols.hpp"
 
 namespace couplet::network {
@@ -18,7 +19,6 @@ bool has_any(const ex& e, const lst& indices) {
     return false;
 }
 
-bool same(const ex& a, const ex& b) { return a.is_equal(b) || (a - b).expand().is_zero(); }
 
 // One of the two bottom-row slots a line fills.
 struct slot {
@@ -171,7 +171,7 @@ std::optional<separation> separate(const msum_term& t, const line_cut& c, const 
         if (s.size() != 2) return std::nullopt;
         // A contraction joins one angular momentum: the same at both ends.
         ex j0 = t.threejs[s[0].vertex].op(s[0].column), j1 = t.threejs[s[1].vertex].op(s[1].column);
-        if (!same(j0, j1)) return std::nullopt;
+        if (!same_value(j0, j1)) return std::nullopt;
         slots.push_back(s);
         angular.push_back(j0);
     }
@@ -242,7 +242,7 @@ std::optional<separation> separate(const msum_term& t, const line_cut& c, const 
         lines_a.push_back({p[1], j[1]});
         lines_b.push_back({p[0], j[0]});
         ex kept = j[0], gone = j[1];
-        if (!same(kept, gone)) {
+        if (!same_value(kept, gone)) {
             if (!is_a<symbol>(gone)) std::swap(kept, gone);
             if (!is_a<symbol>(gone)) return std::nullopt;
             identify[gone] = kept;

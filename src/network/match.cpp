@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <cstdint>
 
+#include "couplet/model/same_value.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/symmetry/symmetries.hpp"
 
@@ -12,13 +13,6 @@ using namespace GiNaC;
 
 namespace {
 
-bool same(const ex& a, const ex& b) {
-    if (a.is_equal(b)) return true;
-    // Two different names, or a name and a number, never agree; only sums need expanding.
-    bool atom_a = is_a<symbol>(a) || is_a<numeric>(a), atom_b = is_a<symbol>(b) || is_a<numeric>(b);
-    if (atom_a && atom_b) return false;
-    return (a - b).expand().is_zero();
-}
 
 bool in_list(const ex& x, const lst& l) {
     for (const ex& y : l)
@@ -150,7 +144,7 @@ private:
             b[p] = value;
             return true;
         }
-        return same(it->second, value);
+        return same_value(it->second, value);
     }
 
     bool unify(const ex& pattern, const ex& symbol3j, exmap& b) const {
@@ -350,7 +344,7 @@ private:
             std::sort(x.begin(), x.end(), ex_is_less());
             std::sort(y.begin(), y.end(), ex_is_less());
             for (int k = 0; k < 3; ++k)
-                if (!same(x[k], y[k])) return false;
+                if (!same_value(x[k], y[k])) return false;
             return true;
         };
         for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {

@@ -1,5 +1,6 @@
 #include "rules/matcher.hpp"
 
+#include "couplet/model/same_value.hpp"
 #include "couplet/model/symbols.hpp"
 #include "rules/structure.hpp"
 
@@ -9,7 +10,6 @@ using namespace GiNaC;
 
 namespace {
 
-bool same(const ex& a, const ex& b) { return (a - b).expand().is_zero(); }
 
 // Extends `bind` so that the pattern symbol's entries become the term symbol's; each pattern
 // index must meet exactly its summation index (indices maps one to the other), and no other
@@ -25,13 +25,13 @@ bool unify(const ex& pattern, const ex& term, exmap& bind, const exmap& indices)
         } else if (is_a<symbol>(p)) {
             auto it = bind.find(p);
             if (it != bind.end()) {
-                if (!same(it->second, t)) return false;
+                if (!same_value(it->second, t)) return false;
             } else {
                 for (const auto& i : indices)
                     if (t.has(i.second)) return false;
                 bind[p] = t;
             }
-        } else if (!same(p, t)) {
+        } else if (!same_value(p, t)) {
             return false;
         }
     }
@@ -53,7 +53,7 @@ std::optional<summand_parts> split(const std::vector<symbol>& xs, const std::vec
         // as much as the whole term (minutes on a reduced network of 30 vertices).
         if (!base.info(GiNaC::info_flags::polynomial)) return nullptr;
         for (size_t k = 0; k < xs.size(); ++k)
-            if (same(base, 2 * xs[k] + 1)) return &out.weights[k];
+            if (same_value(base, 2 * xs[k] + 1)) return &out.weights[k];
         return nullptr;
     };
     for (const ex& f : factors) {
