@@ -1,10 +1,11 @@
 #include "couplet/model/quantum.hpp"
 
 #include <algorithm>
+#include <map>
 #include <stdexcept>
 
+#include "couplet/model/same_value.hpp"
 #include "couplet/model/structure.hpp"
-#include "couplet/model/symbols.hpp"
 #include "couplet/source.hpp"
 
 namespace couplet {
@@ -71,75 +72,20 @@ void quantum_numbers::declare_parity(const std::string& name, qn_parity parity, 
     q.parity = parity;
 }
 
-namespace {
-
-using GiNaC::ex;
-
-// The columns (j, +-m + constant) of a statement whose names are all free where they stand,
-// by the name of m, in walk order.
-class column_walk {
-public:
-    std::map<std::string, std::vector<ex>> owners;
-
-    void walk(const ex& e) {
-        if (GiNaC::is_a<index_sum>(e)) {
-            const auto& s = GiNaC::ex_to<index_sum>(e);
-            const std::size_t depth = bound_.size();
-            for (const ex& i : s.indices()) bound_.push_back(GiNaC::ex_to<GiNaC::symbol>(i).get_name());
-            walk(s.body());
-            bound_.resize(depth);
-            return;
-        }
-        coupling_structure c;
-        add_structure(e, c);
-        for (const auto& [j, m] : c.projections) note(j, m);
-        for (const ex& child : e) walk(child);
-    }
-
-private:
-    bool free_here(const ex& form) const {
-        for (auto it = form.preorder_begin(); it != form.preorder_end(); ++it)
-            if (GiNaC::is_a<GiNaC::symbol>(*it) &&
-                std::find(bound_.begin(), bound_.end(), GiNaC::ex_to<GiNaC::symbol>(*it).get_name()) != bound_.end())
-                return false;
-        return true;
-    }
-
-    void note(const ex& j, const ex& m) {
-        if (!free_here(j) || !free_here(m)) return;
-        const ex x = m.expand();
-        std::vector<GiNaC::symbol> names;
-        for (auto it = x.preorder_begin(); it != x.preorder_end(); ++it)
-            if (GiNaC::is_a<GiNaC::symbol>(*it)) names.push_back(GiNaC::ex_to<GiNaC::symbol>(*it));
-        if (names.empty()) return;
-        for (const auto& n : names)
-            if (!n.is_equal(names.front())) return;
-        // j - m is an integer only when m enters with coefficient +-1 (a slot 2m says j - 2m).
-        const ex rest = x - x.coeff(names.front(), 1) * names.front();
-        const ex c = x.coeff(names.front(), 1);
-        if (!GiNaC::is_a<GiNaC::numeric>(rest) || !(c.is_equal(1) || c.is_equal(-1))) return;
-        owners[names.front().get_name()].push_back(j);
-    }
-
-    std::vector<std::string> bound_;
-};
-
-}  // namespace
-
 quantum_numbers quantum_numbers::for_statement(const GiNaC::ex& statement) const {
-    column_walk columns;
-    columns.walk(statement);
+    std::map<std::string, std::vector<GiNaC::ex>> owners;  // by the name of m, in walk order
+    for (const projection_column& c : free_projection_columns(statement)) owners[c.name.get_name()].push_back(c.j);
     quantum_numbers out = *this;
     for (quantum_number& q : out.numbers_) {
         if (q.role != qn_role::projection) continue;
-        auto it = columns.owners.find(q.name);
-        if (it == columns.owners.end()) {
+        auto it = owners.find(q.name);
+        if (it == owners.end()) {
             q.owner.reset();
             continue;
         }
         const bool program_owner_here =
             q.owner && std::any_of(it->second.begin(), it->second.end(),
-                                   [&](const ex& j) { return (j - *q.owner).expand().is_zero(); });
+                                   [&](const GiNaC::ex& j) { return same_value(j, *q.owner); });
         if (!program_owner_here) q.owner = it->second.front();
     }
     return out;

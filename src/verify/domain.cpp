@@ -115,6 +115,21 @@ public:
         return d;
     }
 
+    // Where e pairs a projection with its own j (model/structure.hpp).
+    void note_projection_columns(const ex& e) {
+        for (const projection_column& c : free_projection_columns(e)) {
+            if (!is_linear_form(c.j) || !is_linear_form(c.m)) continue;
+            cln::cl_RA shift = cln::abs(rational_of(c.shift));
+            projection_reach& r = reach_[c.name.get_name()];
+            if (cln::zerop(shift)) r.plain = true;
+            if (!r.smallest_shift || shift < *r.smallest_shift) r.smallest_shift = shift;
+            if (!r.owner || (cln::zerop(shift) && !r.owner_plain)) {
+                r.owner = c.j;
+                r.owner_plain = cln::zerop(shift);
+            }
+        }
+    }
+
 private:
     bool is_bound(const std::string& name) const {
         return std::find(bound_.begin(), bound_.end(), name) != bound_.end();
@@ -147,30 +162,6 @@ private:
         require(condition::integral, 2 * m, true);
         require(condition::nonnegative, j - m, false);
         require(condition::nonnegative, j + m, false);
-        note_projection_slot(j, m);
-    }
-
-    void note_projection_slot(const ex& j, const ex& m) {
-        if (!free_here(m) || !free_here(j)) return;
-        ex x = m.expand();
-        std::set<std::string> names;
-        symbol only;
-        for (const_preorder_iterator it = x.preorder_begin(); it != x.preorder_end(); ++it)
-            if (is_a<symbol>(*it)) {
-                names.insert(ex_to<symbol>(*it).get_name());
-                only = ex_to<symbol>(*it);
-            }
-        if (names.size() != 1) return;
-        ex c = x.coeff(only, 1);
-        if (!c.is_equal(1) && !c.is_equal(-1)) return;
-        cln::cl_RA shift = cln::abs(rational_of(x.subs(only == 0)));
-        projection_reach& r = reach_[only.get_name()];
-        if (cln::zerop(shift)) r.plain = true;
-        if (!r.smallest_shift || shift < *r.smallest_shift) r.smallest_shift = shift;
-        if (!r.owner || (cln::zerop(shift) && !r.owner_plain)) {
-            r.owner = j;
-            r.owner_plain = cln::zerop(shift);
-        }
     }
 
     void collect_rules(const ex& e) {
@@ -304,7 +295,10 @@ private:
 
 sampling_domain build_domain(const std::vector<ex>& expressions, const quantum_numbers& numbers) {
     collector c(numbers);
-    for (const ex& e : expressions) c.walk(e);
+    for (const ex& e : expressions) {
+        c.walk(e);
+        c.note_projection_columns(e);
+    }
     return c.finish();
 }
 

@@ -20,4 +20,16 @@ struct coupling_structure {
 // Adds the structure of a 3j, CG, 6j, 9j, tri or delta; other expressions add nothing.
 void add_structure(const GiNaC::ex& symbol, coupling_structure& out);
 
+// A column (j, m) of a 3j or CG whose m is one name with coefficient +-1 plus a constant
+// (m, -m, m+1; not 2m, whose column says j - 2m is an integer): it pairs that name with j.
+struct projection_column {
+    GiNaC::symbol name;
+    GiNaC::ex j, m;
+    GiNaC::numeric shift;  // the constant beside +-name
+};
+
+// Such columns of e whose entries are free where they stand (no name bound by an enclosing sum
+// over it), in walk order: how one expression, not the program, pairs its projections.
+std::vector<projection_column> free_projection_columns(const GiNaC::ex& e);
+
 }  // namespace couplet
