@@ -11,6 +11,7 @@
 
 #include "couplet/model/lower.hpp"
 #include "couplet/model/normalize.hpp"
+#include "couplet/model/result_shape.hpp"
 #include "couplet/network/cut.hpp"
 #include "couplet/network/reduce.hpp"
 #include "couplet/simplify.hpp"
@@ -21,19 +22,6 @@
 using namespace couplet;
 
 namespace {
-
-struct counts {
-    int indices = 0, sixj = 0;
-};
-
-counts count(const GiNaC::ex& e) {
-    counts c;
-    for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
-        if (GiNaC::is_a<index_sum>(*it)) c.indices += static_cast<int>(GiNaC::ex_to<index_sum>(*it).indices().nops());
-        if (kind_of(*it) == symbol_kind::sixj) ++c.sixj;
-    }
-    return c;
-}
 
 // Processor time, not wall time: the machine is shared, and wall time measures the neighbours.
 double ms_since(std::clock_t t0) { return 1000.0 * static_cast<double>(std::clock() - t0) / CLOCKS_PER_SEC; }
@@ -51,7 +39,7 @@ void row(const std::string& name, const std::string& text) {
     auto t1 = std::clock();
     GiNaC::ex out = simplify_expression(input, program.numbers);
     double total_ms = ms_since(t1);
-    counts after_network = count(reduced), after = count(out);
+    result_shape after_network = shape_of(reduced), after = shape_of(out);
     std::printf("%-50s %9.1f %9.1f %5d/%-3d %5d/%-3d %4d %s\n", name.c_str(), network_ms, total_ms,
                 after_network.indices, after.indices, after_network.sixj, after.sixj, cuts,
                 testing::msum_indices_in(out) > 0 ? "yes" : "no");

@@ -5,10 +5,10 @@
 #include <algorithm>
 #include <map>
 #include <set>
-#include <tuple>
 
 #include "couplet/model/fresh_index.hpp"
 #include "couplet/model/normalize.hpp"
+#include "couplet/model/result_shape.hpp"
 #include "couplet/run_limits.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/print/print.hpp"
@@ -31,25 +31,6 @@ ex product_of(const std::vector<ex>& factors) {
     ex out = 1;
     for (const ex& f : factors) out *= f;
     return out;
-}
-
-// The leading part of the termination order (engine.hpp): summation indices, 9j, 6j, in that
-// order of importance; for choosing between look-aheads.
-struct factor_count {
-    size_t indices = 0, ninej = 0, sixj = 0;
-    bool operator<(const factor_count& o) const {
-        return std::tie(indices, ninej, sixj) < std::tie(o.indices, o.ninej, o.sixj);
-    }
-};
-
-factor_count count_factors(const ex& e) {
-    factor_count c;
-    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
-        if (is_a<index_sum>(*it)) c.indices += ex_to<index_sum>(*it).indices().nops();
-        if (kind_of(*it) == symbol_kind::ninej) ++c.ninej;
-        if (kind_of(*it) == symbol_kind::sixj) ++c.sixj;
-    }
-    return c;
 }
 
 // Rebuilds e with `target` replaced by `replacement`, also inside sums (whose own subs keeps
@@ -78,6 +59,13 @@ bool is_polynomial_factor(const ex& f) {
     if (is_a<add>(f)) return std::all_of(f.begin(), f.end(), [](const ex& t) { return is_polynomial_factor(t); });
     if (is_a<mul>(f)) return std::all_of(f.begin(), f.end(), [](const ex& t) { return is_polynomial_factor(t); });
     return false;
+}
+
+ex without_polynomial_factors(const ex& term) {
+    ex out = 1;
+    for (const ex& f : factors_of(term))
+        if (!is_polynomial_factor(f)) out *= f;
+    return out;
 }
 
 // An expanded summand such as S + 2x S back to (2x+1) S: like coupling structures collected,
@@ -197,18 +185,10 @@ private:
     // summand would multiply out its (2x+1) weights, 2^n copies of everything else, and descend
     // into every inner sum (minutes on the nested sums a 30-vertex network leaves).
     static ex summand_structure(const ex& body) {
-        ex structure = 1;
-        for (const ex& f : factors_of(body))
-            if (!is_polynomial_factor(f)) structure *= f;
-        if (!is_a<add>(structure)) {
-            bool has_add_factor = false;
-            for (const ex& f : factors_of(structure)) has_add_factor = has_add_factor || is_a<add>(f);
-            if (!has_add_factor) return structure;
-        }
-        ex first = 1;
-        for (const ex& f : factors_of(terms_of(structure.expand()).front()))
-            if (!is_polynomial_factor(f)) first *= f;
-        return first;
+        const ex structure = without_polynomial_factors(body);
+        const std::vector<ex> factors = factors_of(structure);
+        if (std::none_of(factors.begin(), factors.end(), [](const ex& f) { return is_a<add>(f); })) return structure;
+        return without_polynomial_factors(terms_of(structure.expand()).front());
     }
 
     // The summand of s with its indices renamed to `target`, in an order that captures no name
@@ -402,7 +382,7 @@ private:
     std::optional<ex> expand_ninej_for(const ex& term, const std::vector<ex>& outside, const index_sum& s,
                                        const ex& body, const symbol& y) {
         struct outcome {
-            ex candidate, fired;
+            ex candidate, fired, shape;  // shape: fired in canonical arrangements, to spot repeats
             std::vector<rule_step> steps;
         };
         std::vector<outcome> outcomes;
@@ -425,22 +405,21 @@ private:
                 auto fired = probe.rule_on_index(candidate, y);
                 if (!fired) continue;
                 ex shape = symmetry::canonicalize_symbols(*fired, numbers_);
-                bool seen = std::any_of(outcomes.begin(), outcomes.end(), [&](const outcome& o) {
-                    return symmetry::canonicalize_symbols(o.fired, numbers_).is_equal(shape);
-                });
+                bool seen = std::any_of(outcomes.begin(), outcomes.end(),
+                                        [&](const outcome& o) { return o.shape.is_equal(shape); });
                 if (seen) continue;
-                outcomes.push_back({candidate, *fired, probe.trace});
+                outcomes.push_back({candidate, *fired, shape, probe.trace});
             }
         }
         if (outcomes.empty()) return std::nullopt;
         size_t best = 0;
         if (outcomes.size() > 1) {
-            std::vector<factor_count> ends;
+            std::vector<result_shape> ends;
             for (const outcome& o : outcomes) {
                 engine ahead(numbers_);
-                ends.push_back(count_factors(ahead.run(o.fired)));
+                ends.push_back(shape_of(ahead.run(o.fired)));
             }
-            best = static_cast<size_t>(std::min_element(ends.begin(), ends.end()) - ends.begin());
+            best = static_cast<size_t>(std::min_element(ends.begin(), ends.end(), fewer_sums_then_symbols) - ends.begin());
         }
         const outcome& chosen = outcomes[best];
         record("9j expanded as a sum of three 6j", "DLMF 34.6.2", term, chosen.candidate);

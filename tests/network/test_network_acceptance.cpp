@@ -6,6 +6,7 @@
 #include <nlohmann/json.hpp>
 
 #include "acceptance_inputs.hpp"
+#include "couplet/model/result_shape.hpp"
 #include "network_corpus.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"
@@ -30,21 +31,8 @@ simplified simplify_and_compare(const std::string& input, unsigned seed, int sam
     return {result, a};
 }
 
-// Summation indices and 6j factors of a printed result, read back.
-struct shape {
-    int indices = 0, sixj = 0, threej = 0;
-};
-
-shape shape_of(const std::string& result) {
-    GiNaC::ex e = testing::lower_last(result);
-    shape s;
-    for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
-        if (GiNaC::is_a<index_sum>(*it)) s.indices += static_cast<int>(GiNaC::ex_to<index_sum>(*it).indices().nops());
-        if (kind_of(*it) == symbol_kind::sixj) ++s.sixj;
-        if (kind_of(*it) == symbol_kind::threej) ++s.threej;
-    }
-    return s;
-}
+// Summation indices and symbols of a printed result, read back.
+result_shape shape_of_printed(const std::string& result) { return shape_of(testing::lower_last(result)); }
 
 simplified simplify_graph(const std::string& name, unsigned seed, int samples, int twice_max) {
     for (const auto& g : testing::network_corpus())
@@ -157,7 +145,7 @@ TEST_CASE("a square with four open lines becomes one sum of two 6j and two 3j", 
     // DLMF 34.5.23 with 34.3.17 (the interchange), then DLMF 34.5.23 on the triangle it leaves.
     auto s = simplify_graph("square, four open lines", 21, 60, 2);
     INFO(s.result);
-    shape sh = shape_of(s.result);
+    result_shape sh = shape_of_printed(s.result);
     CHECK(sh.indices == 1);
     CHECK(sh.sixj == 2);
     CHECK(sh.threej == 2);
@@ -171,7 +159,7 @@ TEST_CASE("the triangular prism separates into two 6j", "[network][acceptance]")
     // (DLMF 34.5.23 on one triangle, then DLMF 34.4.1).
     auto s = simplify_graph("triangular prism", 22, 30, 2);
     INFO(s.result);
-    shape sh = shape_of(s.result);
+    result_shape sh = shape_of_printed(s.result);
     CHECK(sh.indices == 0);
     CHECK(sh.sixj == 2);
     CHECK(sh.threej == 0);
@@ -184,7 +172,7 @@ TEST_CASE("the closed 12j of the first kind is a single sum of four 6j", "[netwo
     // has one summation index and four 6j.
     auto s = simplify_graph("Moebius ladder of 8 vertices (12j, first kind)", 23, 12, 2);
     INFO(s.result);
-    shape sh = shape_of(s.result);
+    result_shape sh = shape_of_printed(s.result);
     CHECK(sh.indices == 1);
     CHECK(sh.sixj == 4);
     CHECK(sh.threej == 0);
@@ -199,7 +187,7 @@ TEST_CASE("closed 15j networks become sums of 6j with at most two indices", "[ne
     for (std::string name : {"pentagonal prism (15j)", "Moebius ladder of 10 vertices (15j)"}) {
         auto s = simplify_graph(name, 24, 6, 2);
         INFO(name << " -> " << s.result);
-        shape sh = shape_of(s.result);
+        result_shape sh = shape_of_printed(s.result);
         CHECK(sh.indices <= 2);
         CHECK(sh.sixj == 5);
         CHECK(sh.threej == 0);
@@ -211,6 +199,6 @@ TEST_CASE("the Petersen network closes without any m-sum", "[network][acceptance
     // Common practice, no source: girth 5, so two interchanges precede any closing move.
     auto s = simplify_graph("Petersen graph (15j)", 25, 6, 2);
     INFO(s.result);
-    CHECK(shape_of(s.result).threej == 0);
+    CHECK(shape_of_printed(s.result).threej == 0);
     CHECK(s.agreement.equal == s.agreement.points);
 }
