@@ -7,13 +7,6 @@ namespace couplet::phase::detail {
 
 namespace {
 
-using big_vector = std::vector<cln::cl_I>;
-
-// A matrix kept as columns, because every operation below is a column operation.
-struct column_matrix {
-    std::vector<big_vector> columns;
-};
-
 void subtract_multiple(big_vector& target, const cln::cl_I& factor, const big_vector& source) {
     if (cln::zerop(factor)) return;
     for (std::size_t i = 0; i < target.size(); ++i) target[i] = target[i] - factor * source[i];
@@ -23,8 +16,8 @@ void negate(big_vector& v) {
     for (auto& x : v) x = -x;
 }
 
-// Unimodular column operations bringing `work` to column echelon form; `companion` receives the
-// same operations (it may be empty).  Returns, for each pivot column in order, its pivot row.
+}  // namespace
+
 std::vector<std::size_t> column_echelon(column_matrix& work, column_matrix* companion) {
     const std::size_t cols = work.columns.size();
     const std::size_t rows = cols == 0 ? 0 : work.columns[0].size();
@@ -68,6 +61,8 @@ std::vector<std::size_t> column_echelon(column_matrix& work, column_matrix* comp
     }
     return pivot_rows;
 }
+
+namespace {
 
 int_vector to_int_vector(const big_vector& v) {
     int_vector out;

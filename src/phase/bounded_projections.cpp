@@ -2,51 +2,12 @@
 
 #include <cln/rational.h>
 
-#include <cstdlib>
 #include <optional>
 #include <utility>
 
 namespace couplet::phase::detail {
 
 namespace {
-
-// Columns in echelon form by Euclid along each row (unimodular column operations only, so the
-// columns keep generating the same lattice); zero columns are dropped.
-struct echelon {
-    std::vector<int_vector> columns;
-    std::vector<std::size_t> pivot_rows;
-};
-
-echelon column_echelon(std::vector<int_vector> columns, std::size_t rows) {
-    echelon e;
-    std::size_t next = 0;
-    for (std::size_t i = 0; i < rows && next < columns.size(); ++i) {
-        for (;;) {
-            std::size_t best = columns.size();
-            for (std::size_t j = next; j < columns.size(); ++j)
-                if (columns[j][i] != 0 && (best == columns.size() || std::llabs(columns[j][i]) < std::llabs(columns[best][i])))
-                    best = j;
-            if (best == columns.size()) break;
-            std::swap(columns[best], columns[next]);
-            bool cleared = true;
-            for (std::size_t j = next + 1; j < columns.size(); ++j) {
-                const std::int64_t f = columns[j][i] / columns[next][i];
-                for (std::size_t r = 0; r < rows; ++r) columns[j][r] -= f * columns[next][r];
-                cleared = cleared && columns[j][i] == 0;
-            }
-            if (cleared) break;
-        }
-        if (next < columns.size() && columns[next][i] != 0) {
-            if (columns[next][i] < 0)
-                for (auto& x : columns[next]) x = -x;
-            e.pivot_rows.push_back(i);
-            ++next;
-        }
-    }
-    columns.resize(next);
-    e.columns = std::move(columns);
-    return e;
-}
 
 using rational_form = std::vector<cln::cl_RA>;  // coefficients over x = u_B - v0
 
@@ -137,34 +98,34 @@ std::vector<integer_constraint> bound_constraints(std::size_t n, const std::vect
     // is an integer and the rows without a pivot match.
     const std::size_t k = bounded.size();
     const int_vector& v0 = admitted.front();
-    std::vector<int_vector> differences;
+    column_matrix hull;
     for (std::size_t p = 1; p < admitted.size(); ++p) {
-        int_vector d(k);
+        big_vector d(k);
         for (std::size_t a = 0; a < k; ++a) d[a] = admitted[p][a] - v0[a];
-        differences.push_back(std::move(d));
+        hull.columns.push_back(std::move(d));
     }
-    const echelon hull = column_echelon(std::move(differences), k);
+    const std::vector<std::size_t> pivot_rows = column_echelon(hull, nullptr);
     std::vector<rational_form> t;
     std::vector<std::optional<integer_constraint>> rows;
-    for (std::size_t j = 0; j < hull.columns.size(); ++j) {
-        const std::size_t p = hull.pivot_rows[j];
+    for (std::size_t j = 0; j < pivot_rows.size(); ++j) {
+        const std::size_t p = pivot_rows[j];
         rational_form f(k, cln::cl_RA(0));
         f[p] = cln::cl_RA(1);
         for (std::size_t l = 0; l < j; ++l)
-            for (std::size_t a = 0; a < k; ++a) f[a] = f[a] - cln::cl_RA(static_cast<long>(hull.columns[l][p])) * t[l][a];
-        for (auto& c : f) c = c / cln::cl_RA(static_cast<long>(hull.columns[j][p]));
+            for (std::size_t a = 0; a < k; ++a) f[a] = f[a] - hull.columns[l][p] * t[l][a];
+        for (auto& c : f) c = c / hull.columns[j][p];
         rows.push_back(to_row(f, false, n, bounded, v0));
         t.push_back(std::move(f));
     }
     for (std::size_t i = 0, j = 0; i < k; ++i) {
-        if (j < hull.pivot_rows.size() && hull.pivot_rows[j] == i) {
+        if (j < pivot_rows.size() && pivot_rows[j] == i) {
             ++j;
             continue;
         }
         rational_form f(k, cln::cl_RA(0));
         f[i] = cln::cl_RA(1);
-        for (std::size_t l = 0; l < hull.columns.size(); ++l)
-            for (std::size_t a = 0; a < k; ++a) f[a] = f[a] - cln::cl_RA(static_cast<long>(hull.columns[l][i])) * t[l][a];
+        for (std::size_t l = 0; l < pivot_rows.size(); ++l)
+            for (std::size_t a = 0; a < k; ++a) f[a] = f[a] - hull.columns[l][i] * t[l][a];
         rows.push_back(to_row(f, true, n, bounded, v0));
     }
     std::vector<integer_constraint> cuts;

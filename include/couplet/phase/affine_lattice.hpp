@@ -27,6 +27,19 @@ struct affine_lattice {
     std::vector<int_vector> basis;
 };
 
+using big_vector = std::vector<cln::cl_I>;
+
+// A matrix kept as columns, because every operation on it is a column operation.
+struct column_matrix {
+    std::vector<big_vector> columns;
+};
+
+// Unimodular column operations (Euclid along each row) bringing `work` to column echelon form,
+// so its columns keep generating the same lattice; `companion` receives the same operations (it
+// may be empty).  Returns, for each pivot column in order, its pivot row; the columns after the
+// pivot columns are zero.
+std::vector<std::size_t> column_echelon(column_matrix& work, column_matrix* companion);
+
 // Throws std::overflow_error when a reduced entry does not fit in 62 bits.
 affine_lattice solve_affine_lattice(std::size_t n, const std::vector<integer_constraint>& constraints);
 
