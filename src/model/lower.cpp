@@ -124,14 +124,16 @@ private:
             if (!q || !present.count(q->symbol))
                 throw user_error(a.name.offset,
                                  "'" + a.name.name + "' does not occur in the expression to evaluate");
+            // A copy: lowering the value can add names to the table and move its entries.
+            const symbol assigned = q->symbol;
             for (const value_assignment& earlier : s.at)
-                if (earlier.name.is_equal(q->symbol))
+                if (earlier.name.is_equal(assigned))
                     throw user_error(a.name.offset, "'" + a.name.name + "' is assigned twice");
             ex v = expression(a.value);
             if (!is_a<numeric>(v) || !ex_to<numeric>(v).is_rational())
                 throw user_error(a.value.offset, "the value of '" + a.name.name +
                                                      "' must be a number like 1, -2 or 3/2");
-            s.at.push_back({q->symbol, ex_to<numeric>(v), a.value.offset});
+            s.at.push_back({assigned, ex_to<numeric>(v), a.value.offset});
         }
         for (const value_assignment& a : s.at) check_admissible(a, s.at);
     }

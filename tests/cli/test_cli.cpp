@@ -100,3 +100,13 @@ TEST_CASE("each statement of a program pairs its projections by its own columns"
     CHECK(r.code == 0);
     CHECK(r.out == "3j(c, c, 0; M, -M, 0)\n(-1)^(2*a+2*c)*3j(a, b, l; M, -M, 0)\n");
 }
+
+TEST_CASE("an assigned value that names new quantum numbers is refused cleanly", "[cli]") {
+    // Lowering the value adds its names to the table; the assigned name must not be read through
+    // a pointer into the table afterwards (a use after free that the parse fuzzer found).
+    std::string value = "b0";
+    for (int k = 1; k < 40; ++k) value += "+b" + std::to_string(k);
+    auto r = run_cli({"eval", "-e", "3j(a, a, 0; 0, 0, 0) at a = " + value});
+    CHECK(r.code == 2);
+    CHECK(r.err.find("the value of 'a' must be a number like 1, -2 or 3/2") != std::string::npos);
+}
