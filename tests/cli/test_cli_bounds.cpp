@@ -80,12 +80,19 @@ TEST_CASE("the help states every bound with its value", "[cli][bounds]") {
         CHECK(r.out.find(text) != std::string::npos);
 }
 
-// [timing]: drawing the sample must take well under the limit, which a sanitizer build may not do.
+// [timing]: the stop must come after the first points and long before the last.  Entries near
+// 100 make each point cost milliseconds (two Racah sums of about 100 terms for each of about 200
+// x), so 10 000 points take about 30 s on the machine this was measured on, while the symbolic
+// attempt and the drawing of the sample take about 0.15 s: the 2 s limit falls between them with
+// a wide margin on a faster machine and on a loaded one.  (Many cheap points at small j did not
+// have that margin: a quiet machine finished them within the limit, a loaded one was still
+// drawing them when it passed.)
 TEST_CASE("time-limit: during check prints what the points established", "[cli][bounds][timing]") {
-    // DLMF 34.5.14 (6j orthogonality), checked at far more points than 1 s allows.
+    // DLMF 34.5.14 (6j orthogonality) with every fixed entry raised by 100.
     const std::string identity =
-        "sum(x : (2*x+1) * 6j{a, b, x; c, d, p} * 6j{c, d, x; a, b, q}) == delta(p, q)*tri(a, d, p)*tri(b, c, p)/(2*p+1)";
-    auto r = run_cli({"check", "--time-limit", "1", "--depth", "3", "--samples", "40000", "--format", "json",
+        "sum(x : (2*x+1) * 6j{a+100, b+100, x; c+100, d+100, p} * 6j{c+100, d+100, x; a+100, b+100, q}) == "
+        "delta(p, q)*tri(a+100, d+100, p)*tri(b+100, c+100, p)/(2*p+1)";
+    auto r = run_cli({"check", "--time-limit", "2", "--depth", "1", "--samples", "10000", "--format", "json",
                       "-e", identity});
     INFO(r.out << r.err);
     CHECK(r.code == 2);
