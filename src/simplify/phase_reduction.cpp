@@ -2,10 +2,12 @@
 
 #include <cln/rational_io.h>
 
+#include <map>
 #include <set>
 #include <sstream>
 
 #include "couplet/model/lower.hpp"
+#include "couplet/model/normalize.hpp"
 #include "couplet/model/structure.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/phase/context.hpp"
@@ -50,11 +52,15 @@ namespace {
 
 phase::linear_form to_form(const ex& e) { return linear_form_of(e); }
 
-ex to_ex(const phase::linear_form& f, const quantum_numbers& numbers) {
+// Names back to symbols: the program's, else the expression's own.  A summation index that a
+// stage made (x1, ...) is in no table, and a new symbol of the same name would not be bound by
+// its sum.
+ex to_ex(const phase::linear_form& f, const quantum_numbers& numbers, const std::map<std::string, symbol>& own) {
     ex out = numeric(cln::cl_N(f.constant()));
     for (const auto& [name, c] : f.coefficients()) {
         const quantum_number* q = numbers.find(name);
-        out += numeric(cln::cl_N(c)) * (q ? ex(q->symbol) : ex(symbol(name)));
+        auto it = own.find(name);
+        out += numeric(cln::cl_N(c)) * (q ? ex(q->symbol) : it != own.end() ? ex(it->second) : ex(symbol(name)));
     }
     return out;
 }
@@ -95,9 +101,11 @@ std::string show(const phase::assignment& a) {
 class reducer {
 public:
     reducer(const ex& whole, const quantum_numbers& numbers) : numbers_(numbers) {
-        for (const_preorder_iterator it = whole.preorder_begin(); it != whole.preorder_end(); ++it)
+        for (const_preorder_iterator it = whole.preorder_begin(); it != whole.preorder_end(); ++it) {
             if (is_a<index_sum>(*it))
                 for (const ex& i : ex_to<index_sum>(*it).indices()) bound_names_.insert(ex_to<symbol>(i).get_name());
+            if (is_a<symbol>(*it)) own_symbols_.emplace(ex_to<symbol>(*it).get_name(), ex_to<symbol>(*it));
+        }
     }
 
     ex term(const ex& e, const constraints& inherited) {
@@ -179,11 +187,12 @@ private:
                                     ") is not an integer for every admissible value" +
                                     (i.witness ? " (for example at " + show(*i.witness) + ")" : std::string()) +
                                     "; declare the parities with 'int' or 'half', or fix the phase");
-        return make_phase(to_ex(ctx.canonical(x), numbers_));
+        return make_phase(to_ex(ctx.canonical(x), numbers_, own_symbols_));
     }
 
     const quantum_numbers& numbers_;
     std::set<std::string> bound_names_;
+    std::map<std::string, symbol> own_symbols_;
 };
 
 }  // namespace
@@ -191,6 +200,16 @@ private:
 ex reduce_phases(const ex& e, const quantum_numbers& numbers) {
     reducer r(e, numbers);
     return r.term(e, constraints{});
+}
+
+ex phases_reduced_for_reading(const ex& e, const quantum_numbers& numbers) {
+    try {
+        return merge_phases(reduce_phases(merge_phases(e), numbers));
+    } catch (const phase_not_integer&) {
+        return e;  // a term whose sum bounds what the proof needs: shown as the move left it
+    } catch (const std::invalid_argument&) {
+        return e;  // an exponent that is not linear
+    }
 }
 
 }  // namespace couplet

@@ -3,6 +3,8 @@
 #include <catch2/catch.hpp>
 
 #include "couplet/eval/evaluate.hpp"
+#include "couplet/model/fresh_index.hpp"
+#include "couplet/model/symbols.hpp"
 #include "simplify/phase_reduction.hpp"
 #include "support.hpp"
 
@@ -58,4 +60,24 @@ TEST_CASE("a statement keeps the pairing its own columns make", "[model][phase]"
     // A column 2*m1 says d - 2 m1 is an integer, not d - m1: only the plain column counts.
     const quantum_numbers second = p.numbers.for_statement(p.statements[1].value);
     CHECK(!second.at(m1).owner);
+}
+
+TEST_CASE("a phase over a summation index a stage made keeps that index's symbol", "[model][phase]") {
+    // A fresh index (the 9j expansion's, an interchange's) is in no program table; the reduced
+    // phase must name the sum's own symbol, or the sum no longer binds it.
+    const lowered_program p = testing::lower_text("sum(y : (-1)^(3*y+a+b) * (2*y+1) * 6j{a, b, y; d, e, c})");
+    const GiNaC::symbol y = named(p.numbers, "y");
+    const ex summed = p.statements.back().value;
+    REQUIRE(GiNaC::is_a<index_sum>(summed));
+    const GiNaC::symbol x = fresh_index(summed, p.numbers);
+    const ex renamed = make_sum(GiNaC::ex_to<index_sum>(summed).body().subs(y == x), GiNaC::lst{x});
+    const ex reduced = reduce_phases(renamed, p.numbers);
+    INFO(reduced);
+    REQUIRE(reduced.has(x));
+    for (auto it = reduced.preorder_begin(); it != reduced.preorder_end(); ++it) {
+        if (!GiNaC::is_a<GiNaC::symbol>(*it)) continue;
+        const auto& s = GiNaC::ex_to<GiNaC::symbol>(*it);
+        const quantum_number* q = p.numbers.find(s.get_name());
+        CHECK((q ? ex(q->symbol) : ex(x)).is_equal(s));
+    }
 }
