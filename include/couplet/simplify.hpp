@@ -22,7 +22,7 @@ public:
 };
 
 // One applied rule or network move (name, reference, before, after); a network move records
-// the whole expression before and after the m-sum stage.  format_jsum_trace prints them.
+// the term it changed, as it stood and as the move left it.  format_jsum_trace prints them.
 using simplification_step = rules::rule_step;
 
 GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers);

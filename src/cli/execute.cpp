@@ -48,8 +48,10 @@ outcome simplify(const lowered_statement& s, const quantum_numbers& numbers, con
     if (options.show_steps) {
         json steps = json::array();
         for (const simplification_step& step : last_simplification_steps())
-            steps.push_back({{"rule", step.rule}, {"reference", step.reference}, {"before", to_text(step.before)},
-                             {"after", to_text(step.after)}});
+            steps.push_back({{"rule", step.rule},
+                             {"reference", step.reference},
+                             {"before", to_text(phases_reduced_for_reading(step.before, numbers))},
+                             {"after", to_text(phases_reduced_for_reading(step.after, numbers))}});
         record["steps"] = steps;
     }
     if (!options.verify_simplify) return {record};

@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <optional>
 
+#include "couplet/model/normalize.hpp"
 #include "couplet/model/same_value.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/symmetry/symmetries.hpp"
@@ -236,12 +237,15 @@ private:
                 for (const ex& i : s.indices) bound.append(i);
                 auto reduced = apply(s.body, ex_to<symbol>(j), ex_to<symbol>(m), numbers_, bound);
                 if (!reduced) continue;
-                if (steps_) steps_->push_back({completeness_name, completeness_reference});
                 lst rest;
                 for (const ex& i : s.indices)
                     if (!i.is_equal(j) && !i.is_equal(m)) rest.append(i);
-                if (rest.nops() == 0) return *reduced;
-                return (*this)(make_sum(*reduced, rest));  // another pair may remain
+                ex after = rest.nops() == 0 ? *reduced : make_sum(*reduced, rest);
+                if (steps_)
+                    steps_->push_back({completeness_name, completeness_reference,
+                                       merge_phases(make_sum(s.body, s.indices)), merge_phases(after)});
+                if (rest.nops() == 0) return after;
+                return (*this)(after);  // another pair may remain
             }
         }
         return std::nullopt;

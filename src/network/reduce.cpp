@@ -153,10 +153,11 @@ private:
     ex reduce_term(ex body, lst indices) {
         bool changed = false;
         for (int round = 0; round < max_moves_per_term; ++round) {
+            const ex before = make_sum(body, indices);
             if (auto d = resolve_projection_delta(body, indices)) {
                 ex n = merge_phases(d->second.nops() ? make_sum(d->first, d->second) : d->first);
                 if (phases_provable_(n)) {
-                    if (steps_) steps_->push_back({"delta on a summed projection", projection_delta_reference});
+                    note("delta on a summed projection", projection_delta_reference, before, n);
                     changed = true;
                     if (!is_a<index_sum>(n)) return tidy(n);
                     body = ex_to<index_sum>(n).body();
@@ -167,23 +168,25 @@ private:
             term_analysis a = analyze_term(body, indices, numbers_);
             if (!a.term) break;
             std::optional<ex> next;
+            std::string taken, reference;
             for (const move& m : network_moves()) {
                 next = apply_move(m, *a.term, phases_provable_);
                 if (next) {
-                    if (steps_) steps_->push_back({m.name, m.reference});
+                    taken = m.name;
+                    reference = m.reference;
                     break;
                 }
             }
             // A cut adds no sum and leaves two independent smaller networks: before any interchange.
             if (!next)
-                if (auto separated = separate_on_a_cut(*a.term, body)) return *separated;
+                if (auto separated = separate_on_a_cut(*a.term, body, before)) return *separated;
             // Only on a proper network: elsewhere the closing moves cannot finish what it starts.
             if (!next && interchanges_ < max_interchanges && is_proper_network(*a.term)) {
                 next = interchange_on_a_shortest_cycle(*a.term, body);
                 if (next) {
                     ++interchanges_;
-                    if (steps_) steps_->push_back({interchange_move().name, interchange_move().reference});
                     ex n = merge_phases(*next);
+                    note(interchange_move().name, interchange_move().reference, before, n);
                     if (is_a<index_sum>(n)) return tidy(reduce_inside(ex_to<index_sum>(n)));
                     return tidy(n);
                 }
@@ -192,11 +195,13 @@ private:
                 // Last resort, since it leaves entries the moves do not match.
                 next = fix_projection_by_vertex(*a.term);
                 if (next && !phases_provable_(*next)) next.reset();
-                if (next && steps_) steps_->push_back({fixed_projection_name, fixed_projection_reference});
+                taken = fixed_projection_name;
+                reference = fixed_projection_reference;
             }
             if (!next) break;
             changed = true;
             ex n = merge_phases(*next);
+            note(taken, reference, before, n);
             if (!is_a<index_sum>(n)) return tidy(n);
             body = ex_to<index_sum>(n).body();
             indices = ex_to<index_sum>(n).indices();
@@ -205,9 +210,14 @@ private:
         return changed ? tidy(out) : out;
     }
 
+    // The step is recorded when it is taken, so a move inside a part it made follows it.
+    void note(const std::string& name, const std::string& reference, const ex& before, const ex& after) {
+        if (steps_) steps_->push_back({name, reference, before, after});
+    }
+
     // The first cut of two lines, else of three, that separates with provable phases; each
     // closed part is reduced on its own, the other part kept from capture.
-    std::optional<ex> separate_on_a_cut(const msum_term& t, const ex& body) {
+    std::optional<ex> separate_on_a_cut(const msum_term& t, const ex& body, const ex& before) {
         ex context = body;
         for (const ex& o : outer_) context *= o;
         std::vector<symbol> fresh;
@@ -220,7 +230,7 @@ private:
             for (const line_cut& c : find_cuts(t, size)) {
                 auto s = separate(t, c, fresh);
                 if (!s || !phases_provable_(joined(*s))) continue;
-                if (steps_) steps_->push_back({s->name, cut_reference});
+                note(s->name, cut_reference, before, merge_phases(joined(*s)));
                 outer_.push_back(make_sum(s->body_b, s->indices_b));
                 ex a = reduce_term(s->body_a, s->indices_a);
                 outer_.back() = a;

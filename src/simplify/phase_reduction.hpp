@@ -21,6 +21,10 @@ public:
 
 GiNaC::ex reduce_phases(const GiNaC::ex& e, const quantum_numbers& numbers);
 
+// For display (the --steps trace): the phases merged and reduced where the phase algebra can
+// prove the exponents integral, `e` itself where it cannot.  Never changes the value.
+GiNaC::ex phases_reduced_for_reading(const GiNaC::ex& e, const quantum_numbers& numbers);
+
 // A linear GiNaC expression as the phase group's linear form; std::invalid_argument otherwise.
 phase::linear_form linear_form_of(const GiNaC::ex& e);
 

@@ -14,9 +14,8 @@ namespace couplet {
 namespace {
 thread_local std::vector<simplification_step> steps_taken;
 
-void record_network_steps(const std::vector<network::reduction_step>& moves, const GiNaC::ex& before,
-                          const GiNaC::ex& after) {
-    for (const auto& m : moves) steps_taken.push_back({m.move, m.reference, before, after});
+void record_network_steps(const std::vector<network::reduction_step>& moves) {
+    for (const auto& m : moves) steps_taken.push_back({m.move, m.reference, m.before, m.after});
 }
 }  // namespace
 
@@ -29,17 +28,15 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     GiNaC::ex x = normalize(e);
     x = symmetry::canonicalize_symbols(x, numbers);
     std::vector<network::reduction_step> completeness;
-    GiNaC::ex before_completeness = merge_phases(x);  // as the trace prints it
     x = network::reduce_completeness(x, numbers, &completeness);
-    record_network_steps(completeness, before_completeness, x);
+    record_network_steps(completeness);
     x = nest_projection_sums(x, numbers);
     check_expansion(x);
     x = merge_phases(x.expand());
     check_deadline();
     std::vector<network::reduction_step> moves;
-    GiNaC::ex before_moves = x;
     x = network::reduce_msums(x, numbers, &moves);
-    record_network_steps(moves, before_moves, x);
+    record_network_steps(moves);
     check_deadline();
     x = reduce_phases(x, numbers);
     check_deadline();

@@ -37,3 +37,22 @@ TEST_CASE("steps: says so when nothing applies, and the network moves are listed
     auto bubble = run_cli({"simplify", "--steps", "-e", "sum(m1, m2 : <a m1, b m2 | c M> * <a m1, b m2 | d Mp>)"});
     CHECK(bubble.out.find("(DLMF 34.3.16)") != std::string::npos);
 }
+
+TEST_CASE("steps: each network move shows the term it changed, with phases reduced", "[cli][steps]") {
+    // An invented square of four 3j with four open lines: an interchange, then the triangle
+    // (DLMF 34.5.23), then the projection the selection rule fixes.
+    const std::string square =
+        "sum(m1, m2, m3, m4 : (-1)^(a-m1+b-m2+c-m3+d-m4) * 3j(a, d, e; m1, -m4, M1) * 3j(b, a, f; m2, -m1, M2)"
+        " * 3j(c, b, g; m3, -m2, M3) * 3j(d, c, h; m4, -m3, M4))";
+    auto r = run_cli({"simplify", "--steps", "--format", "json", "-e", square});
+    INFO(r.out << r.err);
+    REQUIRE(r.code == 0);
+    auto steps = nlohmann::json::parse(r.out).at("steps");
+    REQUIRE(steps.size() >= 3);
+    for (std::size_t k = 1; k < steps.size(); ++k) {
+        CHECK(steps[k].at("before") != steps[k - 1].at("before"));
+        CHECK(steps[k].at("before") != steps[k].at("after"));
+    }
+    // The input's metric phase (-1)^(a-m1+...) is printed reduced, not as the move took it.
+    CHECK(steps[0].at("before").get<std::string>().find("-m1-m2-m3-m4") == std::string::npos);
+}

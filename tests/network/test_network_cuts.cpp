@@ -10,6 +10,7 @@
 #include "couplet/network/cut.hpp"
 #include "couplet/network/reduce.hpp"
 #include "couplet/symmetry/symmetries.hpp"
+#include "simplify/phase_reduction.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"
 #include "support.hpp"
@@ -39,6 +40,20 @@ prepared prepare(const std::string& text) {
 std::vector<GiNaC::symbol> three_fresh(const GiNaC::ex& e, const quantum_numbers& numbers) {
     GiNaC::symbol a = fresh_index(e, numbers), b = fresh_index(e * a, numbers), c = fresh_index(e * a * b, numbers);
     return {a, b, c};
+}
+
+// The indices a move made (names the program does not know) that no sum in `e` binds.
+GiNaC::lst free_fresh_indices(const GiNaC::ex& e, const quantum_numbers& numbers) {
+    std::set<GiNaC::ex, GiNaC::ex_is_less> bound, free;
+    for (auto it = e.preorder_begin(); it != e.preorder_end(); ++it) {
+        if (GiNaC::is_a<index_sum>(*it))
+            for (const GiNaC::ex& i : GiNaC::ex_to<index_sum>(*it).indices()) bound.insert(i);
+        if (GiNaC::is_a<GiNaC::symbol>(*it) && !numbers.find(GiNaC::ex_to<GiNaC::symbol>(*it))) free.insert(*it);
+    }
+    GiNaC::lst out;
+    for (const GiNaC::ex& s : free)
+        if (!bound.count(s)) out.append(s);
+    return out;
 }
 
 struct tally {
@@ -177,4 +192,28 @@ TEST_CASE("the reduction separates on a two-line cut before any interchange", "[
     auto a = testing::network_agreement_at_points(p.input, out, p.program.numbers, 21, 20, 3);
     CHECK(a.equal == a.points);
     CHECK(a.nonzero > 2);
+}
+
+TEST_CASE("each recorded move holds the term it changed and what it made of it (equal in value)", "[network][cuts]") {
+    auto p = prepare(testing::graph_network_text(10, cube_cut_of_two_edges, {8, 9}, 5));
+    std::vector<network::reduction_step> steps;
+    network::reduce_msums(p.summed, p.program.numbers, &steps);
+    REQUIRE(steps.size() >= 3);
+    for (std::size_t k = 0; k < steps.size(); ++k) {
+        INFO(steps[k].move << ": " << steps[k].before << " -> " << steps[k].after);
+        CHECK_FALSE(steps[k].before.is_equal(steps[k].after));
+        if (k > 0) CHECK_FALSE(steps[k].before.is_equal(steps[k - 1].before));
+        // A move keeps the value (the moves' own DLMF identities): checked exactly at points.  A
+        // move inside an interchange's sum leaves that sum's index free: both sides are summed over it.
+        GiNaC::lst outer = free_fresh_indices(steps[k].before, p.program.numbers);
+        auto a = testing::network_agreement_at_points(make_sum(steps[k].before, outer), make_sum(steps[k].after, outer),
+                                                      p.program.numbers, 31 + k, 20, 3);
+        CHECK(a.equal == a.points);
+        CHECK(a.points > 0);
+        // The trace prints the term with its phases reduced: that form has the same value.
+        GiNaC::ex read = phases_reduced_for_reading(steps[k].before, p.program.numbers);
+        auto r = testing::network_agreement_at_points(make_sum(steps[k].before, outer), make_sum(read, outer),
+                                                      p.program.numbers, 41 + k, 20, 3);
+        CHECK(r.equal == r.points);
+    }
 }

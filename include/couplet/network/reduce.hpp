@@ -15,6 +15,8 @@ namespace couplet::network {
 struct reduction_step {
     std::string move;       // the move's name
     std::string reference;  // its DLMF equation
+    GiNaC::ex before;       // the term the move changed, as it stood
+    GiNaC::ex after;        // and what the move made of it
 };
 
 // Expects 3j (not CG) symbols and merged phases, as canonicalize_symbols and merge_phases
