@@ -9,6 +9,7 @@
 #include <cstdlib>
 #include <string>
 
+#include "cli/fixed_layout.hpp"
 #include "couplet/model/lower.hpp"
 #include "couplet/model/normalize.hpp"
 #include "couplet/model/result_shape.hpp"
@@ -48,6 +49,7 @@ void row(const std::string& name, const std::string& text) {
 }  // namespace
 
 int main(int argc, char** argv) {
+    couplet::cli::run_with_fixed_address_layout(argv);  // the same shapes on every run
     const int per_size = argc > 1 ? std::atoi(argv[1]) : 3;
     std::printf("%-50s %9s %9s %9s %9s %4s %s\n", "case", "net ms", "all ms", "sums", "6j", "cuts", "m-sum left");
     std::printf("%-50s %9s %9s %9s %9s\n", "", "", "", "net/all", "net/all");
