@@ -141,7 +141,8 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         add_common_options(*sub, r);
         if (std::string(c.name) == "simplify")
             sub->add_flag("--steps", r.steps,
-                          "After each result, list the network moves and sum rules applied, with their references");
+                          "After each result, list the network moves and sum rules applied, with their references "
+                          "and the term each one changed, before and after");
         if (std::string(c.name) == "latex")
             sub->add_flag("--fragment", r.fragment, "Print only the formulas, without the document around them");
         sub->callback([&r, name = c.name] { r.command = name; });
