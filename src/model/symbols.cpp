@@ -79,6 +79,14 @@ ex kdelta_eval(const ex& x, const ex& y) {
 
 ex triangle_eval(const ex& a, const ex& b, const ex& c) {
     if (is_num(a) && is_num(b) && is_num(c)) return numeric_triangle_fails(a, b, c) ? 0 : 1;
+    // (x, y, 0) is a triad exactly when x = y, for angular momenta x, y >= 0 (then x + y = 2x is
+    // an integer).  Only bare names: an entry such as j - 1 may be negative.
+    const ex* entries[] = {&a, &b, &c};
+    for (int z = 0; z < 3; ++z) {
+        if (!entries[z]->is_zero()) continue;
+        const ex &x = *entries[(z + 1) % 3], &y = *entries[(z + 2) % 3];
+        if (is_a<symbol>(x) && is_a<symbol>(y)) return kdelta(x, y);
+    }
     return triangle(a, b, c).hold();
 }
 

@@ -259,16 +259,34 @@ private:
         return std::nullopt;
     }
 
-    // delta(p, q) * f(p, q) -> delta(p, q) * f(p, p): the later name in the readable order goes.
+    // delta(p, q) * f(p, q) -> delta(p, q) * f(p, p): the later name in the readable order goes;
+    // delta(p, 0) * f(p) -> delta(p, 0) * f(0), and so for any value that does not hold p.
+    // A delta taken twice is taken once: delta^n = delta for n >= 1.
     std::optional<ex> eliminate_delta(const ex& term) {
         std::vector<ex> factors = factors_of(term);
         for (size_t k = 0; k < factors.size(); ++k) {
+            const ex& f = factors[k];
+            if (!is_a<power>(f) || kind_of(f.op(0)) != symbol_kind::delta || !is_a<numeric>(f.op(1)) ||
+                !ex_to<numeric>(f.op(1)).is_pos_integer())
+                continue;
+            std::vector<ex> others = factors;
+            others[k] = f.op(0);
+            ex after = product_of(others);
+            record("a repeated delta counts once", "common practice, no source", term, after);
+            return after;
+        }
+        for (size_t k = 0; k < factors.size(); ++k) {
             if (kind_of(factors[k]) != symbol_kind::delta) continue;
             const ex &u = factors[k].op(0), &v = factors[k].op(1);
-            if (!is_a<symbol>(u) || !is_a<symbol>(v) || u.is_equal(v)) continue;
-            bool u_first = readable_name_less(ex_to<symbol>(u).get_name(), ex_to<symbol>(v).get_name());
-            const ex& keep = u_first ? u : v;
-            const ex& drop = u_first ? v : u;
+            if (u.is_equal(v)) continue;
+            const bool both_names = is_a<symbol>(u) && is_a<symbol>(v);
+            bool u_stays;
+            if (both_names) u_stays = readable_name_less(ex_to<symbol>(u).get_name(), ex_to<symbol>(v).get_name());
+            else if (is_a<symbol>(v) && !u.has(v)) u_stays = true;
+            else if (is_a<symbol>(u) && !v.has(u)) u_stays = false;
+            else continue;
+            const ex& keep = u_stays ? u : v;
+            const ex& drop = u_stays ? v : u;
             std::vector<ex> others = factors;
             others.erase(others.begin() + static_cast<long>(k));
             ex rest = product_of(others);

@@ -189,6 +189,43 @@ TEST_CASE("delta elimination in disguise: the later name goes everywhere", "[rul
     CHECK(count_of(s.text, "q") == count_of(s.text, "delta("));  // q only inside the deltas
 }
 
+TEST_CASE("a delta with a value puts the value in; a delta taken twice counts once", "[rules][cli]") {
+    // Common practice, no source: delta(c, 0) f(c) = delta(c, 0) f(0), delta^2 = delta; then the
+    // 6j with a zero argument (DLMF 34.5.1) and tri(a, a, 0) = 1 (DLMF 34.2, the triangle
+    // condition).  Written as a bubble pair leaves it: the delta squared, its value second.
+    auto s = simplify_and_compare("", "delta(c, 0)^2 * tri(a, a, c) * 6j{a, b, c; d, e, f} * (2*c+1)", true, 600);
+    require_exact(s);
+    INFO(s.text);
+    CHECK(count_of(s.text, "^2") == 0);
+    CHECK(count_of(s.text, "6j") == 0);
+    CHECK(count_of(s.text, "c") == 1);  // only inside delta(0, c)
+    // A value that is a linear form: delta(c, d+1) f(c) = delta(c, d+1) f(d+1).
+    auto t = simplify_and_compare("", "delta(d+1, c) * 6j{c, b, a; d, e, f}", true, 600);
+    require_exact(t);
+    INFO(t.text);
+    CHECK(count_of(t.text, "c") == 1);
+}
+
+TEST_CASE("tri with a zero entry is the delta of the other two", "[rules]") {
+    // DLMF 34.2: (x, y, 0) is a triad exactly when x = y.  The symbolic form is compared with
+    // the numeric triangle test at every pair of j <= 4 (and the zero in each position).
+    GiNaC::symbol x("x"), y("y");
+    for (int position = 0; position < 3; ++position) {
+        GiNaC::ex args[3] = {x, y, 0};
+        std::swap(args[2], args[position]);
+        GiNaC::ex symbolic = triangle(args[0], args[1], args[2]);
+        CHECK(kind_of(symbolic) == symbol_kind::delta);
+        for (int a = 0; a <= 8; ++a)
+            for (int b = 0; b <= 8; ++b) {
+                GiNaC::exmap at{{x, GiNaC::numeric(a, 2)}, {y, GiNaC::numeric(b, 2)}};
+                GiNaC::ex numeric_args[3] = {args[0].subs(at), args[1].subs(at), args[2].subs(at)};
+                CHECK(symbolic.subs(at).is_equal(triangle(numeric_args[0], numeric_args[1], numeric_args[2])));
+            }
+    }
+    // An entry that is not a bare name may be negative, where a delta would say 1.
+    CHECK(kind_of(triangle(x - 1, x - 1, 0)) == symbol_kind::triangle);
+}
+
 TEST_CASE("chain over two indices: Biedenharn-Elliott over v, then orthogonality over w", "[rules][cli]") {
     // DLMF 34.5.16-34.5.17 with b = a, c = d, f = e, so that its two 6j are one 6j squared, then
     // DLMF 34.5.14 over w = p.  Every 6j rearranged, the phase split and padded with (-1)^(4v).
