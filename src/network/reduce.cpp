@@ -128,7 +128,7 @@ public:
     reducer(const quantum_numbers& numbers, std::vector<reduction_step>* steps) : numbers_(numbers), steps_(steps) {
         phases_provable_ = [this](const ex& candidate) {
             try {
-                reduce_phases(merge_phases(candidate), numbers_);
+                prove_phases_integral(merge_phases(candidate), numbers_);
                 return true;
             } catch (const phase_not_integer&) {
                 return false;

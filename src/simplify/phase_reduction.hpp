@@ -21,6 +21,9 @@ public:
 
 GiNaC::ex reduce_phases(const GiNaC::ex& e, const quantum_numbers& numbers);
 
+// What reduce_phases proves, without the rewriting: throws phase_not_integer where it would.
+void prove_phases_integral(const GiNaC::ex& e, const quantum_numbers& numbers);
+
 // For display (the --steps trace): the phases merged and reduced where the phase algebra can
 // prove the exponents integral, `e` itself where it cannot.  Never changes the value.
 GiNaC::ex phases_reduced_for_reading(const GiNaC::ex& e, const quantum_numbers& numbers);

@@ -81,3 +81,27 @@ TEST_CASE("a phase over a summation index a stage made keeps that index's symbol
         CHECK((q ? ex(q->symbol) : ex(x)).is_equal(s));
     }
 }
+
+TEST_CASE("the proof-only phase walk refuses exactly what the reduction refuses", "[model][phase]") {
+    // (-1)^(a+b+c) beside a 3j with triad (a, b, c) is integral (DLMF 34.2: a+b+c is an
+    // integer); (-1)^(a+b) is not where a+b may be half-odd (common practice, no source).
+    for (const std::string text : {"(-1)^(a+b+c) * 3j(a, b, c; 0, 0, 0)", "(-1)^(a+b) * 6j{a, b, c; d, e, f}",
+                                   "(-1)^(a+e+f) * 6j{a, b, c; d, e, f}", "(-1)^(2*m) * 3j(a, b, c; m, -m, 0)"}) {
+        const lowered_program p = testing::lower_text(text);
+        const ex e = p.statements.back().value;
+        bool reduction_refuses = false, proof_refuses = false;
+        try {
+            reduce_phases(e, p.numbers);
+        } catch (const phase_not_integer&) {
+            reduction_refuses = true;
+        }
+        try {
+            prove_phases_integral(e, p.numbers);
+        } catch (const phase_not_integer&) {
+            proof_refuses = true;
+        }
+        INFO(text);
+        CHECK(reduction_refuses == proof_refuses);
+        CHECK(reduction_refuses == (text.find("(a+b)") != std::string::npos));
+    }
+}
