@@ -9,7 +9,9 @@ namespace {
 
 void subtract_multiple(big_vector& target, const cln::cl_I& factor, const big_vector& source) {
     if (cln::zerop(factor)) return;
-    for (std::size_t i = 0; i < target.size(); ++i) target[i] = target[i] - factor * source[i];
+    // The columns, and the transform's above all, are mostly zero: skip those entries.
+    for (std::size_t i = 0; i < target.size(); ++i)
+        if (!cln::zerop(source[i])) target[i] = target[i] - factor * source[i];
 }
 
 void negate(big_vector& v) {
