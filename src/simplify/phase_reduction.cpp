@@ -106,7 +106,8 @@ public:
         for (const_preorder_iterator it = whole.preorder_begin(); it != whole.preorder_end(); ++it) {
             if (is_a<index_sum>(*it))
                 for (const ex& i : ex_to<index_sum>(*it).indices()) bound_names_.insert(ex_to<symbol>(i).get_name());
-            if (is_a<symbol>(*it)) own_symbols_.emplace(ex_to<symbol>(*it).get_name(), ex_to<symbol>(*it));
+            // Only a rewrite writes names back; the proof-only walk runs per candidate move.
+            if (rewrite_ && is_a<symbol>(*it)) own_symbols_.emplace(ex_to<symbol>(*it).get_name(), ex_to<symbol>(*it));
         }
     }
 
