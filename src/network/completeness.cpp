@@ -17,7 +17,6 @@ namespace {
 const char* const completeness_name = "3j completeness";
 const char* const completeness_reference = "DLMF 34.3.17";
 
-
 // The summand split into its (-1) exponent, the 3j that hold J or M, and the rest.
 struct split_summand {
     ex exponent = 0;

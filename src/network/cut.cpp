@@ -19,7 +19,6 @@ bool has_any(const ex& e, const lst& indices) {
     return false;
 }
 
-
 // One of the two bottom-row slots a line fills.
 struct slot {
     int vertex = -1, column = -1, sign = 0;

@@ -13,7 +13,6 @@ using namespace GiNaC;
 
 namespace {
 
-
 bool in_list(const ex& x, const lst& l) {
     for (const ex& y : l)
         if (x.is_equal(y)) return true;

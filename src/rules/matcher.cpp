@@ -10,7 +10,6 @@ using namespace GiNaC;
 
 namespace {
 
-
 // Extends `bind` so that the pattern symbol's entries become the term symbol's; each pattern
 // index must meet exactly its summation index (indices maps one to the other), and no other
 // pattern symbol may take a value involving a summation index.
