@@ -139,14 +139,22 @@ public:
     ex operator()(const ex& e) override {
         if (!is_a<index_sum>(e)) return e.map(*this);
         const auto& s = ex_to<index_sum>(e);
-        ex body = (*this)(s.body()).expand();
+        const ex inner = (*this)(s.body());
+        const ex body = inner.expand();
         if (!is_a<add>(body)) return reduce_term(body, s.indices());
         for (const ex& t : body)
             for (const ex& i : s.indices())
-                if (!t.has(i)) return make_sum(body, s.indices());  // a term the sum does not bound
+                if (!t.has(i)) return make_sum(inner, s.indices());  // a term the sum does not bound
+        // Split into one sum per term only where some term's network reduces: a sum no move
+        // changes keeps its summand as written, weights and all.
         ex out = 0;
-        for (const ex& t : body) out += reduce_term(t, s.indices());
-        return out;
+        bool changed = false;
+        for (const ex& t : body) {
+            const ex r = reduce_term(t, s.indices());
+            changed = changed || !r.is_equal(make_sum(t, s.indices()));
+            out += r;
+        }
+        return changed ? out : make_sum(inner, s.indices());
     }
 
 private:

@@ -1,22 +1,49 @@
 #include "couplet/simplify.hpp"
 
 #include "couplet/model/normalize.hpp"
+#include "couplet/model/result_shape.hpp"
 #include "couplet/network/completeness.hpp"
 #include "couplet/network/reduce.hpp"
 #include "couplet/run_limits.hpp"
 #include "couplet/rules/engine.hpp"
 #include "couplet/symmetry/symmetries.hpp"
+#include "simplify/closed_form.hpp"
+#include "simplify/frozen_weights.hpp"
 #include "simplify/nest_sums.hpp"
 #include "simplify/phase_reduction.hpp"
 
 namespace couplet {
 
+using GiNaC::ex;
+using GiNaC::is_a;
+
 namespace {
 thread_local std::vector<simplification_step> steps_taken;
 
-void record_network_steps(const std::vector<network::reduction_step>& moves) {
-    for (const auto& m : moves) steps_taken.push_back({m.move, m.reference, m.before, m.after});
+void record_network_steps(const std::vector<network::reduction_step>& moves, const frozen_weights& weights) {
+    for (const auto& m : moves)
+        steps_taken.push_back({m.move, m.reference, weights.thaw(m.before), weights.thaw(m.after)});
 }
+// The input in canonical arrangement with its phases reduced and its terms collected: what
+// an answer is measured against.
+ex input_form(const ex& e, const quantum_numbers& numbers) {
+    ex x = merge_phases(symmetry::canonicalize_symbols(normalize(e), numbers));
+    try {
+        x = reduce_phases(x, numbers);
+    } catch (const phase_not_integer&) {
+        // Left as written; the reduction of the same phases was refused or proved elsewhere.
+    }
+    return closed_form(merge_phases(x));
+}
+
+int term_count(const ex& e) { return is_a<GiNaC::add>(e) ? static_cast<int>(e.nops()) : 1; }
+
+// An answer never has more terms, sums or coupling symbols than the input's own form.
+bool never_worse(const ex& answer, const ex& input) {
+    const result_shape a = shape_of(answer), i = shape_of(input);
+    return term_count(answer) <= term_count(input) && a.indices <= i.indices && a.symbols() <= i.symbols();
+}
+
 }  // namespace
 
 const std::vector<simplification_step>& last_simplification_steps() { return steps_taken; }
@@ -29,20 +56,28 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     x = symmetry::canonicalize_symbols(x, numbers);
     std::vector<network::reduction_step> completeness;
     x = network::reduce_completeness(x, numbers, &completeness);
-    record_network_steps(completeness);
+    record_network_steps(completeness, frozen_weights());
     x = nest_projection_sums(x, numbers);
     check_expansion(x);
-    x = merge_phases(x.expand());
+    frozen_weights weights;
+    x = merge_phases(weights.freeze(x, numbers).expand());
     check_deadline();
     std::vector<network::reduction_step> moves;
-    x = network::reduce_msums(x, numbers, &moves);
-    record_network_steps(moves);
+    x = weights.thaw(network::reduce_msums(x, numbers, &moves));
+    record_network_steps(moves, weights);
     check_deadline();
     x = reduce_phases(x, numbers);
     check_deadline();
     x = apply_jsum_rules(x, numbers);
     steps_taken.insert(steps_taken.end(), last_jsum_trace().begin(), last_jsum_trace().end());
-    return merge_phases(x);
+    x = closed_form(merge_phases(x));
+    const ex input = input_form(e, numbers);
+    if (!never_worse(x, input)) {
+        steps_taken.push_back({"the input's own form kept", "no reduction with fewer terms, sums and symbols",
+                               x, input});
+        return input;
+    }
+    return x;
 }
 
 }  // namespace couplet

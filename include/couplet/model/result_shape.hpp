@@ -11,6 +11,7 @@ namespace couplet {
 
 struct result_shape {
     int indices = 0, ninej = 0, sixj = 0, threej = 0;
+    int symbols() const { return ninej + sixj + threej; }
 };
 
 result_shape shape_of(const GiNaC::ex& e);

@@ -1,0 +1,212 @@
+#include "simplify/closed_form.hpp"
+
+#include <algorithm>
+#include <array>
+#include <vector>
+
+#include "couplet/model/structure.hpp"
+#include "couplet/model/symbols.hpp"
+
+namespace couplet {
+
+using namespace GiNaC;
+
+namespace {
+
+std::vector<ex> factors(const ex& term) {
+    if (is_a<mul>(term)) return {term.begin(), term.end()};
+    return {term};
+}
+
+bool is_polynomial(const ex& e) {
+    if (is_a<numeric>(e)) return ex_to<numeric>(e).is_rational();
+    if (is_a<symbol>(e)) return true;
+    if (is_a<add>(e) || is_a<mul>(e))
+        return std::all_of(e.begin(), e.end(), [](const ex& o) { return is_polynomial(o); });
+    if (is_a<power>(e))
+        return is_polynomial(e.op(0)) && is_a<numeric>(e.op(1)) && ex_to<numeric>(e.op(1)).is_pos_integer();
+    return false;
+}
+
+// Expansion of the top level only: sums, roots and the coupling symbols are held as atoms, so
+// a summand or a root is not multiplied out along with the products around it.
+ex expand_top_level(const ex& e) {
+    exmap atoms, back;
+    struct holder : map_function {
+        exmap& atoms;
+        exmap& back;
+        holder(exmap& a, exmap& b) : atoms(a), back(b) {}
+        ex operator()(const ex& x) override {
+            const bool root = is_a<power>(x) && is_a<numeric>(x.op(1)) && !ex_to<numeric>(x.op(1)).is_integer();
+            if (is_a<index_sum>(x) || root || is_a<phase_factor>(x)) {
+                for (const auto& [a, v] : back)
+                    if (v.is_equal(x)) return a;
+                ex a = symbol("#atom" + std::to_string(back.size() + 1));
+                back[a] = x;
+                return a;
+            }
+            return x.map(*this);
+        }
+    } h(atoms, back);
+    return h(e).expand().subs(back, subs_options::no_pattern);
+}
+
+struct split_term {
+    ex coefficient = 1;  // numbers and polynomial factors
+    ex structure = 1;    // everything else
+};
+
+split_term split(const ex& term) {
+    split_term out;
+    for (const ex& f : factors(term)) (is_polynomial(f) ? out.coefficient : out.structure) *= f;
+    return out;
+}
+
+// The single sum among a structure's factors, with the rest, when the rest does not mention
+// the sum's indices.
+bool single_sum(const ex& structure, ex& sum, ex& rest) {
+    int count = 0;
+    rest = 1;
+    for (const ex& f : factors(structure)) {
+        if (is_a<index_sum>(f)) {
+            sum = f;
+            ++count;
+        } else {
+            rest *= f;
+        }
+    }
+    if (count != 1) return false;
+    return true;
+}
+
+// Whether a sum can take `outside` into its summand without capturing a name.
+bool can_enter(const ex& sum, const ex& outside) {
+    for (const ex& i : ex_to<index_sum>(sum).indices())
+        if (outside.has(i)) return false;
+    return true;
+}
+
+ex collect_level(const ex& e);
+
+// Sums' bodies first, so that like summands are already collected when sums are compared.
+struct inner_sums : map_function {
+    ex operator()(const ex& x) override {
+        if (is_a<index_sum>(x)) {
+            const auto& s = ex_to<index_sum>(x);
+            return make_sum(collect_level(s.body()), s.indices());
+        }
+        return x.map(*this);
+    }
+};
+
+ex collect_level(const ex& e) {
+    inner_sums inner;
+    const ex x = expand_top_level(inner(e));
+    std::vector<ex> terms;
+    if (is_a<add>(x)) terms.assign(x.begin(), x.end());
+    else terms.push_back(x);
+
+    struct group {
+        ex structure;  // for a joined sum: the factors outside it
+        ex sum;        // the sum, or 0
+        ex coefficient = 0;
+        ex bodies = 0;  // coefficient * body of each joined sum
+        int members = 0;
+    };
+    std::vector<group> groups;
+    for (const ex& t : terms) {
+        split_term p = split(t);
+        ex sum, rest;
+        if (single_sum(p.structure, sum, rest) && can_enter(sum, rest * p.coefficient)) {
+            const auto& s = ex_to<index_sum>(sum);
+            auto it = std::find_if(groups.begin(), groups.end(), [&](const group& g) {
+                return !g.sum.is_zero() && g.structure.is_equal(rest) &&
+                       ex_to<index_sum>(g.sum).indices().is_equal(s.indices());
+            });
+            if (it == groups.end()) groups.push_back({rest, sum, p.coefficient, p.coefficient * s.body(), 1});
+            else {
+                it->coefficient += p.coefficient;
+                it->bodies += p.coefficient * s.body();
+                ++it->members;
+            }
+            continue;
+        }
+        auto it = std::find_if(groups.begin(), groups.end(),
+                               [&](const group& g) { return g.sum.is_zero() && g.structure.is_equal(p.structure); });
+        if (it == groups.end()) groups.push_back({p.structure, 0, p.coefficient, 0, 1});
+        else {
+            it->coefficient += p.coefficient;
+            ++it->members;
+        }
+    }
+    ex out = 0;
+    for (const group& g : groups) {
+        if (g.sum.is_zero()) {
+            out += factor(g.coefficient.expand()) * g.structure;
+        } else if (g.members == 1) {
+            out += factor(g.coefficient.expand()) * g.structure * g.sum;
+        } else {
+            const lst& indices = ex_to<index_sum>(g.sum).indices();
+            out += g.structure * make_sum(collect_level(g.bodies), indices);
+        }
+    }
+    return out;
+}
+
+bool same_triad(const std::array<ex, 3>& a, const std::array<ex, 3>& b) {
+    static const int perms[6][3] = {{0, 1, 2}, {0, 2, 1}, {1, 0, 2}, {1, 2, 0}, {2, 0, 1}, {2, 1, 0}};
+    for (const auto& p : perms)
+        if (a[0].is_equal(b[p[0]]) && a[1].is_equal(b[p[1]]) && a[2].is_equal(b[p[2]])) return true;
+    return false;
+}
+
+// The factor itself, or the base of a positive integer power of it.
+ex base_of(const ex& f) {
+    if (is_a<power>(f) && is_a<numeric>(f.op(1)) && ex_to<numeric>(f.op(1)).is_pos_integer()) return f.op(0);
+    return f;
+}
+
+ex drop_in_product(const ex& term) {
+    const std::vector<ex> fs = factors(term);
+    coupling_structure imposed;
+    for (const ex& f : fs) {
+        const symbol_kind k = kind_of(base_of(f));
+        if (k == symbol_kind::threej || k == symbol_kind::sixj || k == symbol_kind::ninej ||
+            k == symbol_kind::clebsch_gordan)
+            add_structure(base_of(f), imposed);
+    }
+    ex out = 1;
+    for (const ex& f : fs) {
+        const ex b = base_of(f);
+        if (kind_of(b) == symbol_kind::triangle) {
+            const std::array<ex, 3> t{b.op(0), b.op(1), b.op(2)};
+            if (std::any_of(imposed.triads.begin(), imposed.triads.end(),
+                            [&](const std::array<ex, 3>& s) { return same_triad(t, s); }))
+                continue;
+        }
+        out *= f;
+    }
+    return out;
+}
+
+struct triangle_dropper : map_function {
+    ex operator()(const ex& x) override {
+        if (is_a<index_sum>(x)) {
+            const auto& s = ex_to<index_sum>(x);
+            return make_sum((*this)(s.body()), s.indices());
+        }
+        const ex mapped = x.map(*this);
+        return is_a<mul>(mapped) ? drop_in_product(mapped) : mapped;
+    }
+};
+
+}  // namespace
+
+ex without_implied_triangles(const ex& e) {
+    triangle_dropper d;
+    return d(e);
+}
+
+ex closed_form(const ex& e) { return without_implied_triangles(collect_level(e)); }
+
+}  // namespace couplet

@@ -1,0 +1,18 @@
+// The shape of a printed answer (DESIGN section 7): terms that differ only by a polynomial
+// coefficient are collected and their coefficient factored, so (2J+1) weights come back whole
+// and cancel against (2J+1) denominators; sums over the same indices are joined into one; a
+// triangle condition that a 3j, CG, 6j or 9j of the same product imposes is dropped.  Every
+// rewrite keeps the value at every assignment.
+#pragma once
+
+#include <ginac/ginac.h>
+
+namespace couplet {
+
+GiNaC::ex closed_form(const GiNaC::ex& e);
+
+// tri(a, b, c) dropped from each product (also inside sums) that holds a coupling symbol with
+// the triad (a, b, c): that symbol vanishes wherever the condition fails.
+GiNaC::ex without_implied_triangles(const GiNaC::ex& e);
+
+}  // namespace couplet

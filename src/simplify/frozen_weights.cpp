@@ -1,0 +1,95 @@
+#include "simplify/frozen_weights.hpp"
+
+#include <set>
+#include <string>
+
+#include "couplet/model/symbols.hpp"
+
+namespace couplet {
+
+using namespace GiNaC;
+
+namespace {
+
+bool is_polynomial(const ex& e) {
+    if (is_a<numeric>(e) || is_a<symbol>(e)) return true;
+    if (is_a<add>(e) || is_a<mul>(e)) {
+        for (const ex& o : e)
+            if (!is_polynomial(o)) return false;
+        return true;
+    }
+    if (is_a<power>(e))
+        return is_polynomial(e.op(0)) && is_a<numeric>(e.op(1)) && ex_to<numeric>(e.op(1)).is_pos_integer();
+    return false;
+}
+
+// A factor that expansion would split or multiply out: a polynomial that is not a monomial,
+// any power of one, or a root of a polynomial.
+bool is_weight(const ex& e) {
+    if (is_a<add>(e)) return is_polynomial(e);
+    if (is_a<power>(e) && is_a<numeric>(e.op(1))) {
+        const numeric& n = ex_to<numeric>(e.op(1));
+        if (n.is_integer()) return is_a<add>(e.op(0)) && is_polynomial(e.op(0));
+        return n.is_rational() && is_polynomial(e.op(0)) && !is_a<numeric>(e.op(0));
+    }
+    return false;
+}
+
+bool touches(const ex& e, const std::set<std::string>& names, const quantum_numbers& numbers) {
+    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
+        if (!is_a<symbol>(*it)) continue;
+        const auto& s = ex_to<symbol>(*it);
+        if (names.count(s.get_name())) return true;
+        const quantum_number* q = numbers.find(s);
+        if (q && q->role == qn_role::projection) return true;
+    }
+    return false;
+}
+
+}  // namespace
+
+ex frozen_weights::placeholder_for(const ex& weight) {
+    for (const auto& [placeholder, w] : to_weight_)
+        if (w.is_equal(weight)) return placeholder;
+    // '#' starts a comment in the language, so no user name can take this form.
+    ex placeholder = symbol("#weight" + std::to_string(to_weight_.size() + 1));
+    to_weight_[placeholder] = weight;
+    to_placeholder_[weight] = placeholder;
+    return placeholder;
+}
+
+ex frozen_weights::freeze(const ex& e, const quantum_numbers& numbers) {
+    struct walker {
+        frozen_weights& self;
+        const quantum_numbers& numbers;
+        std::set<std::string> bound;
+        ex operator()(const ex& x) {
+            if (is_weight(x) && !touches(x, bound, numbers)) return self.placeholder_for(x);
+            if (is_a<index_sum>(x)) {
+                const auto& s = ex_to<index_sum>(x);
+                std::set<std::string> outer = bound;
+                for (const ex& i : s.indices()) bound.insert(ex_to<symbol>(i).get_name());
+                ex body = (*this)(s.body());
+                bound = outer;
+                return make_sum(body, s.indices());
+            }
+            if (is_a<add>(x) || is_a<mul>(x) || is_a<power>(x)) {
+                exvector ops;
+                for (const ex& o : x) ops.push_back((*this)(o));
+                if (is_a<add>(x)) return add(ops);
+                if (is_a<mul>(x)) return mul(ops);
+                return pow(ops[0], ops[1]);
+            }
+            return x;
+        }
+    };
+    walker w{*this, numbers, {}};
+    return w(e);
+}
+
+ex frozen_weights::thaw(const ex& e) const {
+    if (to_weight_.empty()) return e;
+    return e.subs(to_weight_, subs_options::no_pattern);
+}
+
+}  // namespace couplet
