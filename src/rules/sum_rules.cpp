@@ -103,6 +103,32 @@ sum_rule triangle_dimension() {
     return s.r;
 }
 
+// The one-6j sums: with the two rows alike and with them crossed.  Both hold exactly at every
+// sampled point of the self-test; the handbook tabulates the family.
+sum_rule weighted_sixj_sum() {
+    builder s;
+    s.r.name = "sum of (2x+1) times one 6j";
+    s.r.reference = "Varshalovich et al. (1988) sec. 9.8 (section number from memory)";
+    auto x = s("x"), a = s("a"), b = s("b"), c = s("c");
+    s.r.index = x;
+    s.r.factors = {six(a, b, x, a, b, c)};
+    // Every triad of the 6j is (a b x) or (a b c): nothing on the right enforces the second.
+    s.r.result = make_phase(2 * a + 2 * b) * tri(a, b, c);
+    return s.r;
+}
+
+sum_rule signed_sixj_sum() {
+    builder s;
+    s.r.name = "sum of (-1)^(a+b+x) (2x+1) times one 6j";
+    s.r.reference = "Varshalovich et al. (1988) sec. 9.8 (section number from memory)";
+    auto x = s("x"), a = s("a"), b = s("b"), c = s("c");
+    s.r.index = x;
+    s.r.phase = a + b + x;
+    s.r.factors = {six(a, b, x, b, a, c)};
+    s.r.result = sqrt(hat2(a) * hat2(b)) * kdelta(c, 0).hold();
+    return s.r;
+}
+
 sum_rule ninej_orthogonality() {
     builder s;
     s.r.name = "9j orthogonality";
@@ -139,7 +165,7 @@ sum_rule ninej_sum_rule() {
 const std::vector<sum_rule>& sum_rules() {
     static const std::vector<sum_rule> all{orthogonality(),         racah_sum(),          biedenharn_elliott(),
                                            ninej_from_three_sixj(), triangle_dimension(), ninej_orthogonality(),
-                                           ninej_sum_rule()};
+                                           ninej_sum_rule(),        weighted_sixj_sum(),  signed_sixj_sum()};
     return all;
 }
 
