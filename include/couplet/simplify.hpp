@@ -27,6 +27,11 @@ using simplification_step = rules::rule_step;
 
 GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers);
 
+// e without any identity applied: every symbol in its canonical arrangement, phases merged and
+// reduced, like terms collected, implied triangles dropped.  An answer of simplify_expression
+// never has more terms, sums or coupling symbols than this form of its input.
+GiNaC::ex canonical_form(const GiNaC::ex& e, const quantum_numbers& numbers);
+
 // The steps of the last simplify_expression call on this thread, in order, for the
 // derivation trace (`simplify --steps`): the network moves, then the j-sum rules.
 const std::vector<simplification_step>& last_simplification_steps();

@@ -24,18 +24,6 @@ void record_network_steps(const std::vector<network::reduction_step>& moves, con
     for (const auto& m : moves)
         steps_taken.push_back({m.move, m.reference, weights.thaw(m.before), weights.thaw(m.after)});
 }
-// The input in canonical arrangement with its phases reduced and its terms collected: what
-// an answer is measured against.
-ex input_form(const ex& e, const quantum_numbers& numbers) {
-    ex x = merge_phases(symmetry::canonicalize_symbols(normalize(e), numbers));
-    try {
-        x = reduce_phases(x, numbers);
-    } catch (const phase_not_integer&) {
-        // Left as written; the reduction of the same phases was refused or proved elsewhere.
-    }
-    return closed_form(merge_phases(x));
-}
-
 int term_count(const ex& e) { return is_a<GiNaC::add>(e) ? static_cast<int>(e.nops()) : 1; }
 
 // An answer never has more terms, sums or coupling symbols than the input's own form.
@@ -45,6 +33,16 @@ bool never_worse(const ex& answer, const ex& input) {
 }
 
 }  // namespace
+
+ex canonical_form(const ex& e, const quantum_numbers& numbers) {
+    ex x = merge_phases(symmetry::canonicalize_symbols(normalize(e), numbers));
+    try {
+        x = reduce_phases(x, numbers);
+    } catch (const phase_not_integer&) {
+        // Left as written: whether such a phase is acceptable is for the pipeline to say.
+    }
+    return closed_form(merge_phases(x));
+}
 
 const std::vector<simplification_step>& last_simplification_steps() { return steps_taken; }
 
@@ -71,7 +69,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     x = apply_jsum_rules(x, numbers);
     steps_taken.insert(steps_taken.end(), last_jsum_trace().begin(), last_jsum_trace().end());
     x = closed_form(merge_phases(x));
-    const ex input = input_form(e, numbers);
+    const ex input = canonical_form(e, numbers);
     if (!never_worse(x, input)) {
         steps_taken.push_back({"the input's own form kept", "no reduction with fewer terms, sums and symbols",
                                x, input});
