@@ -16,10 +16,14 @@
 
 using namespace couplet;
 
+namespace {
+int term_count(const GiNaC::ex& e) { return GiNaC::is_a<GiNaC::add>(e) ? static_cast<int>(e.nops()) : 1; }
+}  // namespace
+
 int main(int argc, char** argv) {
     const int count = argc > 1 ? std::atoi(argv[1]) : 10000;
     const unsigned seed = argc > 2 ? static_cast<unsigned>(std::atoi(argv[2])) : 11;
-    int inputs = 0, mismatches = 0, refused = 0, errors = 0, closed = 0, left_summed = 0, compared = 0;
+    int inputs = 0, longer = 0, mismatches = 0, refused = 0, errors = 0, closed = 0, left_summed = 0, compared = 0;
     double slowest_ms = 0;
     std::string slowest;
     auto start = std::chrono::steady_clock::now();
@@ -38,6 +42,7 @@ int main(int argc, char** argv) {
             }
             double ms = std::chrono::duration<double, std::milli>(std::chrono::steady_clock::now() - t0).count();
             if (ms > slowest_ms) slowest_ms = ms, slowest = to_text(input);
+            if (term_count(output) > term_count(canonical_form(input, c.numbers))) ++longer;
             (testing::bound_indices(output).empty() ? closed : left_summed) += 1;
             auto report = testing::compare_at_points(input, output, c.numbers, 5000u + static_cast<unsigned>(k), 6, 6);
             compared += report.compared;
@@ -53,7 +58,7 @@ int main(int argc, char** argv) {
     }
     double total_s = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     std::cout << "inputs " << inputs << "\nmismatches " << mismatches << "\nerrors " << errors << "\nrefused "
-              << refused << "\nclosed (no sum left) " << closed << "\nleft as a sum " << left_summed
+              << refused << "\nclosed (no sum left) " << closed << "\nleft as a sum " << left_summed << "\nmore terms than the input's own form " << longer
               << "\npoints compared " << compared << "\nslowest simplify " << slowest_ms << " ms\ntotal " << total_s
               << " s\n";
     if (!slowest.empty()) std::cout << "slowest input: " << slowest << "\n";

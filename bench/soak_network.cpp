@@ -14,11 +14,15 @@
 
 using namespace couplet;
 
+namespace {
+int term_count(const GiNaC::ex& e) { return GiNaC::is_a<GiNaC::add>(e) ? static_cast<int>(e.nops()) : 1; }
+}  // namespace
+
 int main(int argc, char** argv) {
     const int count = argc > 1 ? std::atoi(argv[1]) : 10000;
     const unsigned seed = argc > 2 ? static_cast<unsigned>(std::atoi(argv[2])) : 7;
     std::mt19937 rng(seed);
-    int inputs = 0, mismatches = 0, unreduced = 0, partly = 0, closed = 0, failures = 0, points = 0, nonzero = 0;
+    int inputs = 0, longer = 0, mismatches = 0, unreduced = 0, partly = 0, closed = 0, failures = 0, points = 0, nonzero = 0;
     double slowest_ms = 0, simplify_ms = 0, check_ms = 0;
     std::string slowest;
     auto start = std::chrono::steady_clock::now();
@@ -33,6 +37,7 @@ int main(int argc, char** argv) {
             double ms = std::chrono::duration<double, std::milli>(std::chrono::steady_clock::now() - t0).count();
             simplify_ms += ms;
             if (ms > slowest_ms) slowest_ms = ms, slowest = net.text;
+            if (term_count(output) > term_count(canonical_form(input, program.numbers))) ++longer;
             int after = testing::msum_indices_in(output);
             (after == 0 ? closed : after < net.lines ? partly : unreduced) += 1;
             auto t1 = std::chrono::steady_clock::now();
@@ -52,7 +57,7 @@ int main(int argc, char** argv) {
     double total_s = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     std::cout << "inputs " << inputs << "\nmismatches " << mismatches << "\nerrors " << failures
               << "\nunreduced (no m-sum removed) " << unreduced << "\npartly reduced " << partly
-              << "\nclosed (no m-sum left) " << closed << "\npoints checked " << points << " (" << nonzero
+              << "\nclosed (no m-sum left) " << closed << "\nmore terms than the input's own form " << longer << "\npoints checked " << points << " (" << nonzero
               << " nonzero)\nslowest simplify " << slowest_ms << " ms\ntime in simplify " << simplify_ms / 1000 << " s, in the exact check " << check_ms / 1000
               << " s, total " << total_s << " s\n";
     if (!slowest.empty()) std::cout << "slowest input: " << slowest << "\n";

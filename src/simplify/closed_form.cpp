@@ -86,6 +86,60 @@ bool can_enter(const ex& sum, const ex& outside) {
     return true;
 }
 
+// base^exponent of a factor, the exponent a positive rational (1 for a plain factor), or none.
+bool positive_power(const ex& f, ex& base, numeric& exponent) {
+    if (is_a<numeric>(f)) return false;
+    if (is_a<power>(f)) {
+        if (!is_a<numeric>(f.op(1)) || !ex_to<numeric>(f.op(1)).is_rational() || !ex_to<numeric>(f.op(1)).is_positive())
+            return false;
+        base = f.op(0);
+        exponent = ex_to<numeric>(f.op(1));
+        return true;
+    }
+    base = f;
+    exponent = 1;
+    return true;
+}
+
+// A sum of terms with a factor in common written as that factor times the rest:
+// (-1)^x S A + (-1)^x S B -> (-1)^x S (A + B).  Only whole factors and positive powers of them
+// are taken out, so nothing is divided; not where a cofactor is itself a sum of terms, which
+// would merge into the others ((2a+1) S + T S stays as it is).
+ex common_factors_out(const ex& e) {
+    if (!is_a<add>(e)) return e;
+    std::vector<std::pair<ex, numeric>> common;
+    bool first = true;
+    for (const ex& t : e) {
+        std::vector<std::pair<ex, numeric>> here;
+        for (const ex& f : factors(t)) {
+            ex b;
+            numeric n;
+            if (positive_power(f, b, n)) here.emplace_back(b, n);
+        }
+        if (first) {
+            common = here;
+            first = false;
+            continue;
+        }
+        std::vector<std::pair<ex, numeric>> kept;
+        for (const auto& [b, n] : common) {
+            auto it = std::find_if(here.begin(), here.end(), [&](const auto& h) { return h.first.is_equal(b); });
+            if (it != here.end()) kept.emplace_back(b, std::min(n, it->second));
+        }
+        common = kept;
+    }
+    if (common.empty()) return e;
+    ex taken = 1;
+    for (const auto& [b, n] : common) taken *= pow(b, n);
+    ex rest = 0;
+    for (const ex& t : e) {
+        const ex cofactor = t / taken;
+        if (is_a<add>(cofactor)) return e;
+        rest += cofactor;
+    }
+    return taken * rest;
+}
+
 ex collect_level(const ex& e);
 
 // Sums' bodies first, so that like summands are already collected when sums are compared.
@@ -153,6 +207,17 @@ ex collect_level(const ex& e) {
     return out;
 }
 
+// Common factors out at every level, sums' bodies included.
+struct common_out : map_function {
+    ex operator()(const ex& x) override {
+        if (is_a<index_sum>(x)) {
+            const auto& s = ex_to<index_sum>(x);
+            return make_sum((*this)(s.body()), s.indices());
+        }
+        return common_factors_out(x.map(*this));
+    }
+};
+
 bool same_triad(const std::array<ex, 3>& a, const std::array<ex, 3>& b) {
     static const int perms[6][3] = {{0, 1, 2}, {0, 2, 1}, {1, 0, 2}, {1, 2, 0}, {2, 0, 1}, {2, 1, 0}};
     for (const auto& p : perms)
@@ -207,6 +272,11 @@ ex without_implied_triangles(const ex& e) {
     return d(e);
 }
 
-ex closed_form(const ex& e) { return without_implied_triangles(collect_level(e)); }
+// Triangles are dropped before common factors come out, while each still stands in one product
+// with the symbols that imply it.
+ex closed_form(const ex& e) {
+    common_out c;
+    return c(without_implied_triangles(collect_level(e)));
+}
 
 }  // namespace couplet

@@ -1,7 +1,8 @@
 // The shape of a printed answer (DESIGN section 7): terms that differ only by a polynomial
 // coefficient are collected and their coefficient factored, so (2J+1) weights come back whole
 // and cancel against (2J+1) denominators; sums over the same indices are joined into one; a
-// triangle condition that a 3j, CG, 6j or 9j of the same product imposes is dropped.  Every
+// triangle condition that a 3j, CG, 6j or 9j of the same product imposes is dropped; factors
+// common to every term are taken out.  Every
 // rewrite keeps the value at every assignment.
 #pragma once
 
