@@ -38,6 +38,10 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
   <j1 m1, j2 m2 | J M>         (-1)^(EXPR)  sqrt(EXPR)  delta(x, y)  tri(a, b, c)
   sum(i, k : EXPR)             + - * / ^ and parentheses; numbers like 3 and 1/2
 
+Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
+collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product
+imposes it; never more terms, sums or symbols than the input in canonical form.
+
 Checks and simplifications are verified by exact evaluation at every admissible point with
 all free j <= --depth (default 2; at most 4000 points, chosen at random beyond that)
 and at --samples random points with larger j (default 200).  At default settings simplify
