@@ -45,16 +45,29 @@ outcome simplify(const lowered_statement& s, const quantum_numbers& numbers, con
     json record{{"kind", "simplify"}, {"input", s.text}, {"result", to_text(result)},
                 {"latex", to_latex(result)}, {"input_latex", to_latex(s.value)},
                 {"verified", false}, {"points", 0}};
+    std::vector<simplification_step> readable;
     if (options.show_steps) {
         json steps = json::array();
-        for (const simplification_step& step : last_simplification_steps())
+        for (const simplification_step& step : last_simplification_steps()) {
+            auto reading = [&](const ex& x) {
+                return step.shown_as_recorded ? x : phases_reduced_for_reading(x, numbers);
+            };
+            readable.push_back({step.rule, step.reference, reading(step.before), reading(step.after)});
             steps.push_back({{"rule", step.rule},
                              {"reference", step.reference},
-                             {"before", to_text(phases_reduced_for_reading(step.before, numbers))},
-                             {"after", to_text(phases_reduced_for_reading(step.after, numbers))}});
+                             {"before", to_text(readable.back().before)},
+                             {"after", to_text(readable.back().after)}});
+        }
         record["steps"] = steps;
     }
-    if (!options.verify_simplify) return {record};
+    auto done = [&](const json& r) {
+        outcome o;
+        o.record = r;
+        o.result = result;
+        o.steps = readable;
+        return o;
+    };
+    if (!options.verify_simplify) return done(record);
     verify::simplification_check v;
     try {
         v = verify::verify_simplification(s.value, result, numbers, options.sampling, options.progress, budget);
@@ -67,15 +80,15 @@ outcome simplify(const lowered_statement& s, const quantum_numbers& numbers, con
         record["points"] = v.points;
         record["nonzero_points"] = v.nonzero;
         record["points_sampled"] = v.sampled;
-        return {record};
+        return done(record);
     }
     std::string what = !v.result_error.empty()
                            ? "the result cannot be evaluated" + (v.counter ? " at " + verify::describe(*v.counter) : "") +
                                  ": " + v.result_error
                            : "at " + verify::describe(*v.counter) + " the input is " + v.counter->lhs.to_string() +
                                  " but the result is " + v.counter->rhs.to_string();
-    outcome o;
-    o.record = record;
+    outcome o = done(record);
+    o.result = s.value;
     o.record["result"] = to_text(s.value);
     o.record["latex"] = to_latex(s.value);
     o.record["points"] = v.points;
@@ -96,9 +109,13 @@ outcome evaluate(const lowered_statement& s, const quantum_numbers& numbers) {
         throw user_error(s.span.begin, std::string("cannot evaluate: ") + e.what());
     }
     std::string exact_text = value.to_string();
-    return {json{{"kind", "eval"}, {"input", s.text}, {"result", exact_text}, {"exact", exact_text},
-                 {"decimal", value.to_decimal(20)}, {"latex", to_latex(to_ex(value))},
-                 {"input_latex", to_latex(s.value)}}};
+    outcome o;
+    o.record = json{{"kind", "eval"},          {"input", s.text},
+                    {"result", exact_text},    {"exact", exact_text},
+                    {"decimal", value.to_decimal(20)}, {"latex", exact_to_latex(value)},
+                    {"input_latex", to_latex(s.value)}};
+    o.value = value;
+    return o;
 }
 
 // Decided by exact evaluation at sample points (and symbolically when the simplifier reduces
@@ -120,7 +137,9 @@ outcome check(const lowered_statement& s, const quantum_numbers& numbers, const 
         record["holds"] = nullptr;
         record["verdict"] = "internal check failed";
         record["result"] = "internal check failed (see the message on standard error)";
-        outcome out{record, false, true, ""};
+        outcome out;
+        out.record = record;
+        out.internal_failure = true;
         out.diagnostic = "couplet: internal check failed: the simplifier reduced the difference of the two sides of '" +
                          s.text + "' to 0, but " + verify::describe(*r.counter) + " gives " +
                          r.counter->lhs.to_string() + " on the left and " + r.counter->rhs.to_string() +
@@ -129,8 +148,11 @@ outcome check(const lowered_statement& s, const quantum_numbers& numbers, const 
     }
     record.update(verify::to_json(r));
     record["result"] = verify::summary(r);
-    outcome out{record, r.result != verify::verdict::holds && r.result != verify::verdict::undecided};
+    outcome out;
+    out.record = record;
+    out.check_failed = r.result != verify::verdict::holds && r.result != verify::verdict::undecided;
     out.stopped = r.stopped;
+    out.check = r;
     return out;
 }
 
@@ -148,7 +170,7 @@ outcome execute(const lowered_statement& s, const lowered_program& program, bare
             return simplify(s, numbers, options);
         case request_kind::eval: return evaluate(s, numbers);
         case request_kind::check: return check(s, numbers, options);
-        default: return {json()};
+        default: return {};
     }
 }
 

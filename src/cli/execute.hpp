@@ -3,7 +3,12 @@
 
 #include <nlohmann/json.hpp>
 
+#include <optional>
 #include <string>
+#include <vector>
+
+#include "couplet/exact/number.hpp"
+#include "couplet/simplify.hpp"
 
 #include "couplet/model/lower.hpp"
 #include "couplet/verify/identity_check.hpp"
@@ -29,6 +34,12 @@ struct execute_options {
 
 struct outcome {
     nlohmann::json record;   // {"kind", "input", "result", "latex", ...}
+    // The same results as values, for the LaTeX document: simplify's result (the input where
+    // the internal check failed), eval's exact value, check's report, simplify's steps.
+    GiNaC::ex result;
+    std::optional<exact::number> value;
+    std::optional<verify::check_report> check;
+    std::vector<simplification_step> steps;
     bool check_failed = false;
     // couplet caught itself in an error (a simplification that changes the value): the
     // record shows the input unchanged and `diagnostic` says what went wrong.

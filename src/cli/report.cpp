@@ -5,36 +5,27 @@
 namespace couplet::cli {
 
 void reporter::begin() {
-    if (format_ == "latex" && document_)
-        out_ << "\\documentclass{article}\n\\usepackage{amsmath}\n\\begin{document}\n";
+    if (format_ == "latex") latex_.begin();
 }
 
-void reporter::statement(const nlohmann::json& r) {
-    const std::string kind = r.at("kind");
+void reporter::statement(const source_file& src, const lowered_statement& s, const outcome& o) {
+    if (format_ == "latex") {
+        latex_.statement(src, s, o);
+        return;
+    }
+    const nlohmann::json& r = o.record;
+    if (r.is_null()) return;
     if (format_ == "json") {
         out_ << r.dump() << "\n";
         return;
     }
-    if (format_ == "latex") {
-        const std::string result = r.at("latex");
-        std::string body = result;
-        if (kind != "check" && r.at("input_latex") != result) body = r.at("input_latex").get<std::string>() + " = " + result;
-        if (document_)
-            out_ << "\\begin{equation*}\n" << body << "\n\\end{equation*}\n";
-        else
-            out_ << body << "\n";
-        if (document_ && kind == "check")
-            out_ << "% check: " << r.at("verdict").get<std::string>() << "\n";
-        steps(r, "% ");
-        return;
-    }
     out_ << r.at("result").get<std::string>();
-    if (kind == "eval") out_ << "  ~ " << r.at("decimal").get<std::string>();
+    if (r.at("kind") == "eval") out_ << "  ~ " << r.at("decimal").get<std::string>();
     out_ << "\n";
     steps(r, "#   ");
 }
 
-// As comments, so that text output stays valid input and LaTeX still compiles.
+// As comments, so that text output stays valid input.
 void reporter::steps(const nlohmann::json& r, const char* comment) {
     if (!r.contains("steps")) return;
     if (r.at("steps").empty()) out_ << comment << "(no move or rule applied)\n";
@@ -44,8 +35,8 @@ void reporter::steps(const nlohmann::json& r, const char* comment) {
             out_ << comment << line << "\n";
 }
 
-void reporter::end() {
-    if (format_ == "latex" && document_) out_ << "\\end{document}\n";
+void reporter::end(const source_file& src) {
+    if (format_ == "latex") latex_.end(src);
 }
 
 void reporter::error(const source_file& src, const user_error& e) {

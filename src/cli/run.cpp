@@ -143,7 +143,7 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
     for (const auto& c : commands) {
         CLI::App* sub = app.add_subcommand(c.name, c.help);
         add_common_options(*sub, r);
-        if (std::string(c.name) == "simplify")
+        if (std::string(c.name) == "simplify" || std::string(c.name) == "latex")
             sub->add_flag("--steps", r.steps,
                           "After each result, list the network moves and sum rules applied, with their references "
                           "and the term each one changed, before and after");
@@ -235,14 +235,14 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
             } catch (const time_limit_reached&) {
                 throw user_error(s.span.begin, stopped_message(r.time_limit, k, statements.size() - k - 1));
             }
-            if (!o.record.is_null()) rep.statement(o.record);
+            rep.statement(src, s, o);
             if (!o.diagnostic.empty()) err << o.diagnostic;
             if (o.stopped)
                 throw user_error(s.span.begin, stopped_message(r.time_limit, k, statements.size() - k - 1, true));
             any_failed = any_failed || o.check_failed;
             any_internal = any_internal || o.internal_failure;
         }
-        rep.end();
+        rep.end(src);
         return any_internal ? internal_failure : any_failed ? check_false : ok;
     } catch (const user_error& e) {
         rep.error(src, e);

@@ -98,6 +98,7 @@ private:
             throw user_error(d.name.offset, "'" + d.name.name + "' is already used as a quantum "
                                             "number (first at " + where(q->first_offset) + ")");
         later_definitions_.erase(d.name.name);
+        s.name = d.name.name;
         s.value = expression(d.value);
         definitions_.emplace(d.name.name, s.value);
     }

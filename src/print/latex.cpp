@@ -4,8 +4,10 @@
 #include <set>
 #include <sstream>
 
+#include "couplet/exact/number.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/print/print.hpp"
+#include "print/latex_width.hpp"
 #include "print/writer.hpp"
 
 namespace couplet {
@@ -90,9 +92,11 @@ protected:
             case symbol_kind::ninej: return {matrix(f, "Bmatrix"), level::atom};
             case symbol_kind::delta:
                 return {"\\delta_{" + write(f.op(0)).text + "," + write(f.op(1)).text + "}", level::atom};
+            // The triangle condition as the trade writes the condition, {a b c}, not as Racah's
+            // coefficient Delta(abc) (DLMF 34.2.5), which is a different number.
             case symbol_kind::triangle:
-                return {"\\Delta(" + write(f.op(0)).text + "," + write(f.op(1)).text + "," +
-                            write(f.op(2)).text + ")",
+                return {"\\{" + write(f.op(0)).text + "\\, " + write(f.op(1)).text + "\\, " +
+                            write(f.op(2)).text + "\\}",
                         level::atom};
             default: break;
         }
@@ -103,10 +107,81 @@ protected:
     }
 
     printed sum_over(const ex& s) override {
-        const auto& is = ex_to<index_sum>(s);
+        return {summation(s) + " " + at_least(ex_to<index_sum>(s).body(), level::product), level::product};
+    }
+
+public:
+    // \sum with its indices separated by commas, stacked three to a row when there are more.
+    std::string summation(const ex& s) {
+        const lst& indices = ex_to<index_sum>(s).indices();
         std::string under;
-        for (size_t i = 0; i < is.indices().nops(); ++i) under += (i ? " " : "") + write(is.indices().op(i)).text;
-        return {"\\sum_{" + under + "} " + at_least(is.body(), level::product), level::product};
+        for (size_t i = 0; i < indices.nops(); ++i) {
+            if (i) under += i % 3 == 0 ? " \\\\ " : ", ";
+            under += write(indices.op(i)).text;
+        }
+        if (indices.nops() > 3) under = "\\substack{" + under + "}";
+        return "\\sum_{" + under + "}";
+    }
+
+    // Where a long formula may break: the terms of a sum (each with its sign), and inside a
+    // term too wide for a line its factors, and inside a sum over indices the factors of its
+    // summand.  Joined without breaks, the pieces are the formula to_latex prints.
+    std::vector<latex_piece> pieces(const ex& e, double width) {
+        std::vector<latex_piece> out;
+        if (!is_a<add>(e)) {
+            term_pieces(e, "", width, out);
+            return out;
+        }
+        bool first = true;
+        for (const ex& t : ordered_terms(e)) {
+            const bool negative = split_product(t).negative;
+            const std::string sign = first ? (negative ? "-" : "") : (negative ? "- " : "+ ");
+            term_pieces(negative ? ex(-t) : t, sign, width, out);
+            first = false;
+        }
+        return out;
+    }
+
+private:
+    void term_pieces(const ex& t, const std::string& sign, double width, std::vector<latex_piece>& out) {
+        const std::string whole = sign + at_least(t, level::product);
+        if (latex_width(whole) <= width || !(is_a<mul>(t) || is_a<index_sum>(t))) {
+            out.push_back({whole, true});
+            return;
+        }
+        const std::size_t first = out.size();
+        if (is_a<index_sum>(t)) {
+            out.push_back({summation(t), false});
+            term_pieces(ex_to<index_sum>(t).body(), "", width, out);
+        } else {
+            product_parts p = split_product(t);
+            std::string lead;
+            if (!p.bottom.empty() || p.denominator != 1) {
+                printed bottom = p.bottom.empty() ? number(p.denominator)
+                                                  : printed{join(p.bottom, p.denominator), level::product};
+                lead = fraction(p.numerator == 1 ? "1" : number(p.numerator).text, bottom, bottom.binding).text;
+            } else if (p.numerator != 1) {
+                lead = number(p.numerator).text;
+            }
+            if (!lead.empty()) out.push_back({lead, false});
+            for (const ex& f : p.top) {
+                if (is_a<index_sum>(f) && latex_width(write(f).text) > width) {
+                    out.push_back({summation(f), false});
+                    term_pieces(ex_to<index_sum>(f).body(), "", width, out);
+                } else {
+                    out.push_back({at_least(f, level::product), false});
+                }
+            }
+            if (p.negative) out[first].text = "-" + out[first].text;
+        }
+        out[first].text = sign + out[first].text;
+        out[first].starts_term = true;
+    }
+
+    std::string join(const std::vector<ex>& factors, const numeric& coefficient) {
+        std::string out = coefficient == 1 ? "" : number(coefficient).text;
+        for (const ex& f : factors) out += (out.empty() ? "" : " ") + at_least(f, level::product);
+        return out;
     }
 
 private:
@@ -126,6 +201,32 @@ private:
 std::string to_latex(const GiNaC::ex& e) {
     print_detail::latex_writer w;
     return w.write(e).text;
+}
+
+std::string exact_to_latex(const exact::number& value) {
+    if (value.is_zero()) return "0";
+    std::string out;
+    for (const auto& [radicand, coefficient] : value.terms()) {
+        const GiNaC::numeric q{cln::cl_N(coefficient)}, r{cln::cl_N(radicand)};
+        const GiNaC::numeric a = GiNaC::abs(q);
+        std::ostringstream top, bottom;
+        if (r != 1) {
+            if (a.numer() != 1) top << a.numer() << " ";
+            top << "\\sqrt{" << r << "}";
+        } else {
+            top << a.numer();
+        }
+        bottom << a.denom();
+        std::string term = a.denom() == 1 ? top.str() : "\\frac{" + top.str() + "}{" + bottom.str() + "}";
+        if (out.empty()) out = q.is_negative() ? "-" + term : term;
+        else out += (q.is_negative() ? " - " : " + ") + term;
+    }
+    return out;
+}
+
+std::vector<latex_piece> latex_pieces(const GiNaC::ex& e, double width_em) {
+    print_detail::latex_writer w;
+    return w.pieces(e, width_em);
 }
 
 }  // namespace couplet

@@ -2,6 +2,8 @@
 
 #include "couplet/model/normalize.hpp"
 #include "couplet/model/result_shape.hpp"
+#include "couplet/model/symbols.hpp"
+#include "couplet/print/print.hpp"
 #include "couplet/network/completeness.hpp"
 #include "couplet/network/reduce.hpp"
 #include "couplet/run_limits.hpp"
@@ -51,7 +53,12 @@ const std::vector<simplification_step>& last_simplification_steps() { return ste
 GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers) {
     steps_taken.clear();
     GiNaC::ex x = normalize(e);
+    const bool has_clebsch = x.has(clebsch(GiNaC::wild(0), GiNaC::wild(1), GiNaC::wild(2), GiNaC::wild(3),
+                                           GiNaC::wild(4), GiNaC::wild(5)));
+    const ex written = x;
     x = symmetry::canonicalize_symbols(x, numbers);
+    if (has_clebsch)
+        steps_taken.push_back({"Clebsch-Gordan coefficients as 3j symbols", "DLMF 34.1.1", written, merge_phases(x)});
     std::vector<network::reduction_step> completeness;
     x = network::reduce_completeness(x, numbers, &completeness);
     record_network_steps(completeness, frozen_weights());
@@ -64,14 +71,18 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     x = weights.thaw(network::reduce_msums(x, numbers, &moves));
     record_network_steps(moves, weights);
     check_deadline();
+    const ex unreduced = merge_phases(x);
     x = reduce_phases(x, numbers);
+    if (to_text(merge_phases(x)) != to_text(unreduced))
+        steps_taken.push_back({"phases reduced in the phase group", "common practice, no source", unreduced,
+                               merge_phases(x), true});
     check_deadline();
     x = apply_jsum_rules(x, numbers);
     steps_taken.insert(steps_taken.end(), last_jsum_trace().begin(), last_jsum_trace().end());
     x = merge_phases(x);
     const ex closed = closed_form(x);
     if (!closed.is_equal(x))
-        steps_taken.push_back({"closed form: like terms collected, implied triangle conditions dropped",
+        steps_taken.push_back({"like terms collected, implied triangles dropped",
                                "common practice, no source", x, closed});
     x = closed;
     const ex input = canonical_form(e, numbers);

@@ -46,7 +46,7 @@ TEST_CASE("LaTeX forms of the coupling symbols", "[print][latex]") {
     CHECK(tex("<j1 m1, j2 m2 | J M>") == "\\langle j_{1}\\, m_{1}, j_{2}\\, m_{2} \\mid J\\, M\\rangle");
     CHECK(tex("(-1)^(a+b)") == "(-1)^{a+b}");
     CHECK(tex("sum(m1, m2 : 3j(a, b, c; m1, m2, m3))") ==
-          "\\sum_{m_{1} m_{2}} \\begin{pmatrix} a & b & c \\\\ m_{1} & m_{2} & m_{3} \\end{pmatrix}");
+          "\\sum_{m_{1}, m_{2}} \\begin{pmatrix} a & b & c \\\\ m_{1} & m_{2} & m_{3} \\end{pmatrix}");
     CHECK(tex("delta(p, q)/(2*p+1)") == "\\frac{\\delta_{p,q}}{2 p+1}");
 }
 

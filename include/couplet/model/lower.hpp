@@ -29,6 +29,7 @@ struct lowered_statement {
     statement_span span;
     std::string text;      // the statement's source text
     bool bare = false;     // an expression or `A == B` without a keyword
+    std::string name;      // definition: the name it defines
     GiNaC::ex value;       // simplify / eval / check left side / definition value
     GiNaC::ex rhs;         // check right side
     std::vector<value_assignment> at;  // eval ... at

@@ -4,6 +4,8 @@
 
 #include <ginac/ginac.h>
 
+#include "couplet/exact/number.hpp"
+
 #include <string>
 #include <vector>
 
@@ -12,6 +14,18 @@ namespace couplet {
 std::string to_text(const GiNaC::ex& e);
 // amsmath math-mode LaTeX (no surrounding $...$).
 std::string to_latex(const GiNaC::ex& e);
+// Where a long LaTeX formula may break: the terms of a sum (a piece that starts a term carries
+// its sign), and inside a term wider than `width_em` its factors.  Concatenated with spaces the
+// pieces are to_latex(e).
+struct latex_piece {
+    std::string text;
+    bool starts_term = false;
+};
+std::vector<latex_piece> latex_pieces(const GiNaC::ex& e, double width_em);
+
+// An exact value (a sum of rationals times square roots) as LaTeX: \frac{\sqrt{6}}{3}.
+std::string exact_to_latex(const exact::number& value);
+
 // A quantum-number name as TeX: j12 -> j_{12}, J' -> J', lambda -> \lambda.  Only letters,
 // digits, primes and a fixed set of commands can appear in the result.
 std::string latex_identifier(const std::string& name);

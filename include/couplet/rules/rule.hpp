@@ -53,6 +53,9 @@ struct rule_step {
     std::string rule;
     std::string reference;
     GiNaC::ex before, after;
+    // Shown as recorded: a trace reduces the phases of every other step for reading, which
+    // would hide what the phase reduction itself did.
+    bool shown_as_recorded = false;
 };
 
 // Exact comparison of both sides of a sum rule at random points with every j <= twice_max/2:

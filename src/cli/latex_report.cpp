@@ -1,0 +1,225 @@
+#include "cli/latex_report.hpp"
+
+#include <sstream>
+
+#include "couplet/model/symbols.hpp"
+#include "couplet/print/print.hpp"
+#include "couplet/print/step_change.hpp"
+
+namespace couplet::cli {
+
+using GiNaC::ex;
+
+namespace {
+
+// e with `target` replaced by `by` wherever it stands as a whole, sums' bodies included.
+ex replaced(const ex& e, const ex& target, const ex& by) {
+    if (e.is_equal(target)) return by;
+    if (GiNaC::is_a<index_sum>(e)) {
+        const auto& s = GiNaC::ex_to<index_sum>(e);
+        return make_sum(replaced(s.body(), target, by), s.indices());
+    }
+    if (GiNaC::is_a<GiNaC::add>(e) || GiNaC::is_a<GiNaC::mul>(e) || GiNaC::is_a<GiNaC::power>(e)) {
+        GiNaC::exvector ops;
+        for (const ex& o : e) ops.push_back(replaced(o, target, by));
+        if (GiNaC::is_a<GiNaC::add>(e)) return GiNaC::add(ops);
+        if (GiNaC::is_a<GiNaC::mul>(e)) return GiNaC::mul(ops);
+        return GiNaC::pow(ops[0], ops[1]);
+    }
+    return e;
+}
+
+bool has_triangle(const ex& e) {
+    for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it)
+        if (kind_of(*it) == symbol_kind::triangle) return true;
+    return false;
+}
+
+std::string words(const std::string& text) { return "\\text{" + latex_escaped_text(text) + "}"; }
+
+std::string point_latex(const std::vector<std::pair<std::string, GiNaC::numeric>>& at) {
+    std::string out;
+    for (const auto& [name, value] : at)
+        out += (out.empty() ? "" : ",\\ ") + latex_identifier(name) + " = " + to_latex(value);
+    return out;
+}
+
+}  // namespace
+
+void latex_report::begin() {
+    if (document_)
+        out_ << "\\documentclass{article}\n\\usepackage{amsmath}\n\\allowdisplaybreaks\n\\begin{document}\n";
+}
+
+void latex_report::end(const source_file& src) {
+    comments_before(src, src.text().size());
+    if (document_) out_ << "\\end{document}\n";
+}
+
+// Each run of comment lines is one paragraph; a blank line or a statement ends it.
+void latex_report::comments_before(const source_file& src, std::size_t offset) {
+    const std::string& text = src.text();
+    std::string paragraph;
+    auto flush = [&] {
+        if (document_ && !paragraph.empty()) out_ << "\n" << latex_escaped_text(paragraph) << "\n\n";
+        paragraph.clear();
+    };
+    std::size_t at = read_up_to_;
+    while (at < offset && at < text.size()) {
+        std::size_t line_end = std::min(text.find('\n', at), offset);
+        if (line_end == std::string::npos) line_end = std::min(text.size(), offset);
+        const std::string line = text.substr(at, line_end - at);
+        const std::size_t hash = line.find('#');
+        if (hash != std::string::npos) {
+            std::string comment = line.substr(hash + 1);
+            while (!comment.empty() && (comment.front() == ' ' || comment.front() == '#')) comment.erase(0, 1);
+            while (!comment.empty() && (comment.back() == ' ' || comment.back() == '\r')) comment.pop_back();
+            if (!comment.empty()) paragraph += (paragraph.empty() ? "" : " ") + comment;
+        } else if (line.find_first_not_of(" \t\r;") == std::string::npos) {
+            flush();
+        }
+        at = line_end + 1;
+    }
+    flush();
+    read_up_to_ = std::max(read_up_to_, offset);
+}
+
+void latex_report::display(const display_formula& f) {
+    out_ << layout_display(f, document_ ? display_style::document : display_style::fragment);
+}
+
+std::vector<latex_piece> latex_report::side(const ex& e) {
+    legend_for(e);
+    return latex_pieces(named(e), display_width_em);
+}
+
+ex latex_report::named(const ex& e) const {
+    ex out = e;
+    for (auto it = names_.rbegin(); it != names_.rend(); ++it) out = replaced(out, it->first, it->second);
+    return out;
+}
+
+void latex_report::legend_for(const ex& e) {
+    if (!document_ || triangle_explained_ || !has_triangle(e)) return;
+    triangle_explained_ = true;
+    out_ << "\nHere $\\{a\\, b\\, c\\}$ stands for the triangle condition: it is $1$ when "
+            "$|a-b| \\le c \\le a+b$ and $a+b+c$ is an integer, and $0$ otherwise.\n\n";
+}
+
+void latex_report::statement(const source_file& src, const lowered_statement& s, const outcome& o) {
+    comments_before(src, s.span.begin);
+    read_up_to_ = std::max(read_up_to_, s.span.end);
+    switch (s.kind) {
+        case request_kind::definition: {
+            display_formula f;
+            f.sides = {raw(latex_identifier(s.name)), side(s.value)};
+            f.relations = {"="};
+            display(f);
+            names_.emplace_back(s.value, GiNaC::symbol(s.name));
+            return;
+        }
+        case request_kind::simplify:
+            if (o.value) return evaluation(s, o);
+            return simplification(s, o);
+        case request_kind::eval: return evaluation(s, o);
+        case request_kind::check: return check(s, o);
+        default: return;
+    }
+}
+
+void latex_report::simplification(const lowered_statement& s, const outcome& o) {
+    if (document_ && !o.steps.empty()) {
+        display_formula input;
+        input.sides = {side(s.value)};
+        input.tag = "input";
+        display(input);
+        steps(o);
+        display_formula result;
+        result.sides = {side(o.result)};
+        result.relations = {};
+        result.tag = "result";
+        display(result);
+        return;
+    }
+    display_formula f;
+    f.sides = {side(s.value)};
+    if (!o.result.is_equal(s.value)) {
+        f.sides.push_back(side(o.result));
+        f.relations = {"="};
+    }
+    display(f);
+}
+
+// One display per step: what it changed, with the identity and its reference at the side.
+void latex_report::steps(const outcome& o) {
+    int k = 0;
+    for (const simplification_step& step : o.steps) {
+        auto [before, after] = changed_parts(step.before, step.after);
+        display_formula f;
+        f.sides = {side(before), side(after)};
+        f.relations = {"="};
+        f.tag = std::to_string(++k) + ". " + step.rule + " (" + step.reference + ")";
+        display(f);
+    }
+}
+
+void latex_report::evaluation(const lowered_statement& s, const outcome& o) {
+    display_formula f;
+    f.sides = {side(s.value), raw(exact_to_latex(*o.value))};
+    f.relations = {"="};
+    if (o.value->terms().size() != 1 || o.value->terms().begin()->first != 1) {
+        f.sides.push_back(raw(o.record.at("decimal").get<std::string>()));
+        f.relations.push_back("\\approx");
+    }
+    if (!s.at.empty()) {
+        std::vector<std::pair<std::string, GiNaC::numeric>> at;
+        for (const value_assignment& a : s.at) at.emplace_back(a.name.get_name(), a.value);
+        f.note = "\\quad\\text{at } " + point_latex(at);
+    }
+    display(f);
+}
+
+void latex_report::check(const lowered_statement& s, const outcome& o) {
+    display_formula f;
+    f.sides = {side(s.value), side(s.rhs)};
+    if (!o.check) {  // an internal conflict: the message on standard error says what happened
+        f.relations = {"\\overset{?}{=}"};
+        f.note = "\\quad" + words("(internal check failed)");
+        display(f);
+        return;
+    }
+    const verify::check_report& r = *o.check;
+    std::ostringstream points;
+    points << r.points;
+    switch (r.result) {
+        case verify::verdict::holds:
+            f.relations = {"="};
+            f.note = "\\quad" + words(r.points == 0 ? "(holds vacuously: no admissible point)"
+                                      : r.proved_symbolically
+                                          ? "(proved; checked exactly at " + points.str() + " points)"
+                                          : "(verified exactly at " + points.str() + " points)");
+            break;
+        case verify::verdict::undecided:
+            f.relations = {"\\overset{?}{=}"};
+            f.note = "\\quad" + words("(undecided: stopped by the time limit after " + points.str() + " points)");
+            break;
+        case verify::verdict::fails_by_phase:
+            f.relations = {"\\neq"};
+            f.note = "\\quad" + words("holds after multiplying the right side by ") + " " +
+                     to_latex(make_phase(*r.missing_phase));
+            break;
+        case verify::verdict::fails_by_factor:
+            f.relations = {"\\neq"};
+            f.note = "\\quad" + words("holds after multiplying the right side by ") + " " + to_latex(*r.missing_factor);
+            break;
+        case verify::verdict::fails:
+            f.relations = {"\\neq"};
+            if (r.counter)
+                f.note = "\\quad" + words("at ") + point_latex(r.counter->at) + words(" the left side is ") +
+                         exact_to_latex(r.counter->lhs) + words(", the right side ") + exact_to_latex(r.counter->rhs);
+            break;
+    }
+    display(f);
+}
+
+}  // namespace couplet::cli

@@ -1,0 +1,50 @@
+// The LaTeX form of a run: a document (or with --fragment only the formulas) in which each
+// statement is a display that fits the text width; `#` comments become paragraphs, `let` names
+// are typeset as named quantities and used by name afterwards, the triangle condition gets a
+// legend where it first appears, a check shows its verdict in words, an eval its exact value,
+// the point and the decimal, and with --steps a simplification shows each step with the
+// identity it used.
+#pragma once
+
+#include <ginac/ginac.h>
+
+#include <ostream>
+#include <string>
+#include <utility>
+#include <vector>
+
+#include "cli/execute.hpp"
+#include "couplet/print/latex_display.hpp"
+#include "couplet/source.hpp"
+
+namespace couplet::cli {
+
+class latex_report {
+public:
+    latex_report(bool document, std::ostream& out) : document_(document), out_(out) {}
+
+    void begin();
+    // The comment lines of `src` between the previous statement and this one come first.
+    void statement(const source_file& src, const lowered_statement& s, const outcome& o);
+    void end(const source_file& src);
+
+private:
+    void comments_before(const source_file& src, std::size_t offset);
+    void display(const display_formula& f);
+    std::vector<latex_piece> side(const GiNaC::ex& e);
+    std::vector<latex_piece> raw(const std::string& tex) const { return {{tex, true}}; }
+    GiNaC::ex named(const GiNaC::ex& e) const;
+    void legend_for(const GiNaC::ex& e);
+    void simplification(const lowered_statement& s, const outcome& o);
+    void evaluation(const lowered_statement& s, const outcome& o);
+    void check(const lowered_statement& s, const outcome& o);
+    void steps(const outcome& o);
+
+    bool document_;
+    std::ostream& out_;
+    std::size_t read_up_to_ = 0;                            // source offset consumed by comments
+    std::vector<std::pair<GiNaC::ex, GiNaC::ex>> names_;   // (value, symbol) of each `let`
+    bool triangle_explained_ = false;
+};
+
+}  // namespace couplet::cli
