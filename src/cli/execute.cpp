@@ -10,6 +10,7 @@
 #include "couplet/simplify.hpp"
 #include "couplet/model/normalize.hpp"
 #include "couplet/symmetry/symmetries.hpp"
+#include "simplify/closed_form.hpp"
 #include "simplify/phase_reduction.hpp"
 #include "couplet/verify/check_summary.hpp"
 #include "couplet/verify/simplification_check.hpp"
@@ -49,8 +50,9 @@ outcome simplify(const lowered_statement& s, const quantum_numbers& numbers, con
     if (options.show_steps) {
         json steps = json::array();
         for (const simplification_step& step : last_simplification_steps()) {
+            // Like terms collected as in an answer: the j-sum stage works on expanded summands.
             auto reading = [&](const ex& x) {
-                return step.shown_as_recorded ? x : phases_reduced_for_reading(x, numbers);
+                return step.shown_as_recorded ? x : closed_form(phases_reduced_for_reading(x, numbers));
             };
             readable.push_back({step.rule, step.reference, reading(step.before), reading(step.after)});
             steps.push_back({{"rule", step.rule},

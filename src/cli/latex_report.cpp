@@ -155,6 +155,9 @@ void latex_report::steps(const outcome& o) {
     int k = 0;
     for (const simplification_step& step : o.steps) {
         auto [before, after] = changed_parts(step.before, step.after);
+        // A change to a bare number (a triangle that a symbol beside it implies) reads only in context.
+        if (GiNaC::is_a<GiNaC::numeric>(before) || GiNaC::is_a<GiNaC::numeric>(after))
+            before = step.before, after = step.after;
         display_formula f;
         f.sides = {side(before), side(after)};
         f.relations = {"="};
@@ -174,7 +177,7 @@ void latex_report::evaluation(const lowered_statement& s, const outcome& o) {
     if (!s.at.empty()) {
         std::vector<std::pair<std::string, GiNaC::numeric>> at;
         for (const value_assignment& a : s.at) at.emplace_back(a.name.get_name(), a.value);
-        f.note = "\\quad\\text{at } " + point_latex(at);
+        f.notes = {"\\quad\\text{at } " + point_latex(at)};
     }
     display(f);
 }
@@ -184,7 +187,7 @@ void latex_report::check(const lowered_statement& s, const outcome& o) {
     f.sides = {side(s.value), side(s.rhs)};
     if (!o.check) {  // an internal conflict: the message on standard error says what happened
         f.relations = {"\\overset{?}{=}"};
-        f.note = "\\quad" + words("(internal check failed)");
+        f.notes = {"\\quad" + words("(internal check failed)")};
         display(f);
         return;
     }
@@ -194,29 +197,31 @@ void latex_report::check(const lowered_statement& s, const outcome& o) {
     switch (r.result) {
         case verify::verdict::holds:
             f.relations = {"="};
-            f.note = "\\quad" + words(r.points == 0 ? "(holds vacuously: no admissible point)"
+            f.notes = {"\\quad" + words(r.points == 0 ? "(holds vacuously: no admissible point)"
                                       : r.proved_symbolically
                                           ? "(proved; checked exactly at " + points.str() + " points)"
-                                          : "(verified exactly at " + points.str() + " points)");
+                                          : "(verified exactly at " + points.str() + " points)")};
             break;
         case verify::verdict::undecided:
             f.relations = {"\\overset{?}{=}"};
-            f.note = "\\quad" + words("(undecided: stopped by the time limit after " + points.str() + " points)");
+            f.notes = {"\\quad" + words("(undecided: stopped by the time limit after " + points.str() + " points)")};
             break;
         case verify::verdict::fails_by_phase:
             f.relations = {"\\neq"};
-            f.note = "\\quad" + words("holds after multiplying the right side by ") + " " +
-                     to_latex(make_phase(*r.missing_phase));
+            f.notes = {"\\quad" + words("holds after multiplying the right side by ") + " " +
+                       to_latex(make_phase(*r.missing_phase))};
             break;
         case verify::verdict::fails_by_factor:
             f.relations = {"\\neq"};
-            f.note = "\\quad" + words("holds after multiplying the right side by ") + " " + to_latex(*r.missing_factor);
+            f.notes = {"\\quad" + words("holds after multiplying the right side by ") + " " +
+                       to_latex(*r.missing_factor)};
             break;
         case verify::verdict::fails:
             f.relations = {"\\neq"};
             if (r.counter)
-                f.note = "\\quad" + words("at ") + point_latex(r.counter->at) + words(" the left side is ") +
-                         exact_to_latex(r.counter->lhs) + words(", the right side ") + exact_to_latex(r.counter->rhs);
+                f.notes = {"\\quad" + words("at ") + point_latex(r.counter->at),
+                           "\\quad" + words("the left side is ") + exact_to_latex(r.counter->lhs) +
+                               words(", the right side ") + exact_to_latex(r.counter->rhs)};
             break;
     }
     display(f);

@@ -168,6 +168,15 @@ private:
                 if (is_a<index_sum>(f) && latex_width(write(f).text) > width) {
                     out.push_back({summation(f), false});
                     term_pieces(ex_to<index_sum>(f).body(), "", width, out);
+                } else if (is_a<add>(f) && latex_width(write(f).text) > width) {
+                    const std::size_t open = out.size();
+                    std::vector<latex_piece> inner = pieces(f, width);
+                    out.insert(out.end(), inner.begin(), inner.end());
+                    out[open].text = "\\left(" + out[open].text;
+                    out[open].opens = 1;
+                    out[open].starts_term = false;
+                    out.back().text += "\\right)";
+                    out.back().closes += 1;
                 } else {
                     out.push_back({at_least(f, level::product), false});
                 }

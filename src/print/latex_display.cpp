@@ -27,23 +27,28 @@ void flow(const std::vector<latex_piece>& side, const std::string& opening, doub
     std::string line = opening;
     double used = latex_width(opening);
     bool line_has_piece = false;
+    int depth = 0;  // \left( opened on earlier lines and not yet closed
     for (const latex_piece& p : side) {
         const double w = latex_width(p.text);
         if (line_has_piece && used + w > width) {
+            for (int k = 0; k < depth; ++k) line += " \\right.";
             lines.push_back(line);
             line = indent;
+            for (int k = 0; k < depth; ++k) line += " \\left.";
             used = latex_width(indent);
             line_has_piece = false;
         }
+        depth += p.opens;
         std::string text = p.text;
-        if (!line_has_piece && line == indent) {
+        if (!line_has_piece && line.compare(0, indent.size(), indent) == 0) {
             // A new line inside a product says so; a term's sign needs {} to stay a binary sign.
             if (!p.starts_term) text = "\\times " + text, used += 1.3;
             else if (text[0] == '+' || text[0] == '-') text = "{}" + text;
         }
-        line += (line_has_piece || !opening.empty() || line == indent ? " " : "") + text;
+        line += (line_has_piece || !opening.empty() || line != "" ? " " : "") + text;
         used += w + 0.3;
         line_has_piece = true;
+        depth -= p.closes;
     }
     lines.push_back(line);
 }
@@ -51,7 +56,8 @@ void flow(const std::vector<latex_piece>& side, const std::string& opening, doub
 }  // namespace
 
 std::string layout_display(const display_formula& f, display_style style, double width_em) {
-    double total = latex_width(f.note);
+    double total = 0;
+    for (const std::string& n : f.notes) total += latex_width(n);
     for (const auto& side : f.sides) total += width_of(side);
     for (const auto& r : f.relations) total += latex_width(r) + 0.6;
     const std::string tag = f.tag.empty() ? "" : " \\tag*{\\footnotesize " + latex_escaped_text(f.tag) + "}";
@@ -62,7 +68,7 @@ std::string layout_display(const display_formula& f, display_style style, double
             if (k) one += " " + f.relations[k - 1] + " ";
             one += joined(f.sides[k]);
         }
-        one += f.note;
+        for (const std::string& n : f.notes) one += n;
         if (style == display_style::fragment) return one + "\n";
         return "\\begin{equation*}\n" + one + tag + "\n\\end{equation*}\n";
     }
@@ -76,9 +82,9 @@ std::string layout_display(const display_formula& f, display_style style, double
         }
         flow(f.sides[k], opening, width_em, lines);
     }
-    if (!f.note.empty()) {
-        if (latex_width(lines.back()) + latex_width(f.note) <= width_em) lines.back() += f.note;
-        else lines.push_back(f.note);
+    for (const std::string& n : f.notes) {
+        if (latex_width(lines.back()) + latex_width(n) <= width_em) lines.back() += n;
+        else lines.push_back(n);
     }
     const bool document = style == display_style::document;
     std::string out = document ? "\\begin{align*}\n" : "\\begin{aligned}\n";

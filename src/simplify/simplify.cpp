@@ -82,8 +82,8 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     x = merge_phases(x);
     const ex closed = closed_form(x);
     if (!closed.is_equal(x))
-        steps_taken.push_back({"like terms collected, implied triangles dropped",
-                               "common practice, no source", x, closed});
+        steps_taken.push_back({"like terms collected, implied triangles dropped", "common practice, no source", x,
+                               closed, true});
     x = closed;
     const ex input = canonical_form(e, numbers);
     if (!never_worse(x, input)) {

@@ -15,7 +15,9 @@ struct display_formula {
     std::vector<std::vector<latex_piece>> sides;
     std::vector<std::string> relations;  // between consecutive sides: "=", "\\neq", "\\approx"
     std::string tag;                     // set at the side (\tag*), in a document only; plain text
-    std::string note;                    // math-mode material after the formula, e.g. \text{...}
+    // Math-mode material after the formula, e.g. \text{...}: each note on the formula's last line
+    // where it fits, else on a line of its own.
+    std::vector<std::string> notes;
 };
 
 // document: equation* or align*, with the tag; fragment: the bare formula, or an aligned block.

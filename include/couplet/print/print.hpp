@@ -20,6 +20,10 @@ std::string to_latex(const GiNaC::ex& e);
 struct latex_piece {
     std::string text;
     bool starts_term = false;
+    // A parenthesized sum too wide for a line is broken inside its \left( ... \right): its first
+    // piece opens one, its last closes one, and a line break between them closes the line with
+    // \right. and opens the next with \left.
+    int opens = 0, closes = 0;
 };
 std::vector<latex_piece> latex_pieces(const GiNaC::ex& e, double width_em);
 
