@@ -52,7 +52,7 @@ outcome simplify(const lowered_statement& s, const quantum_numbers& numbers, con
         for (const simplification_step& step : last_simplification_steps()) {
             // Like terms collected as in an answer: the j-sum stage works on expanded summands.
             auto reading = [&](const ex& x) {
-                return step.shown_as_recorded ? x : closed_form(phases_reduced_for_reading(x, numbers));
+                return step.shown_as_recorded ? x : collected_terms(phases_reduced_for_reading(x, numbers));
             };
             readable.push_back({step.rule, step.reference, reading(step.before), reading(step.after)});
             steps.push_back({{"rule", step.rule},
@@ -150,6 +150,10 @@ outcome check(const lowered_statement& s, const quantum_numbers& numbers, const 
     }
     record.update(verify::to_json(r));
     record["result"] = verify::summary(r);
+    const char* relation = r.result == verify::verdict::holds       ? " = "
+                           : r.result == verify::verdict::undecided ? " \\overset{?}{=} "
+                                                                     : " \\neq ";
+    record["latex"] = to_latex(s.value) + relation + to_latex(s.rhs);
     outcome out;
     out.record = record;
     out.check_failed = r.result != verify::verdict::holds && r.result != verify::verdict::undecided;

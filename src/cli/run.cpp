@@ -138,15 +138,19 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         {"simplify", "Reduce each expression (m-sums, then sums over j) and check the result exactly"},
         {"check", "Decide each 'A == B' and diagnose a missing phase or factor"},
         {"eval", "Evaluate each expression exactly ('at' gives values)"},
-        {"latex", "Print the statements as a LaTeX document (amsmath)"},
+        {"latex", "Print the statements as a LaTeX document (amsmath) whose displays fit the page"},
     };
     for (const auto& c : commands) {
         CLI::App* sub = app.add_subcommand(c.name, c.help);
         add_common_options(*sub, r);
-        if (std::string(c.name) == "simplify" || std::string(c.name) == "latex")
+        if (std::string(c.name) == "simplify")
             sub->add_flag("--steps", r.steps,
                           "After each result, list the network moves and sum rules applied, with their references "
                           "and the term each one changed, before and after");
+        if (std::string(c.name) == "latex")
+            sub->add_flag("--steps", r.steps,
+                          "Typeset each simplification as a derivation: the input, then each step as the factors "
+                          "it changed with the identity and its reference at the side, then the result");
         if (std::string(c.name) == "latex")
             sub->add_flag("--fragment", r.fragment, "Print only the formulas, without the document around them");
         sub->callback([&r, name = c.name] { r.command = name; });

@@ -272,6 +272,8 @@ ex without_implied_triangles(const ex& e) {
     return d(e);
 }
 
+ex collected_terms(const ex& e) { return collect_level(e); }
+
 // Triangles are dropped before common factors come out, while each still stands in one product
 // with the symbols that imply it.
 ex closed_form(const ex& e) {

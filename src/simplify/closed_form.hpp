@@ -12,6 +12,10 @@ namespace couplet {
 
 GiNaC::ex closed_form(const GiNaC::ex& e);
 
+// Only the collection: like terms collected with their coefficients factored, sums over the
+// same indices joined.  For showing a step's terms as written, triangles and all.
+GiNaC::ex collected_terms(const GiNaC::ex& e);
+
 // tri(a, b, c) dropped from each product (also inside sums) that holds a coupling symbol with
 // the triad (a, b, c): that symbol vanishes wherever the condition fails.
 GiNaC::ex without_implied_triangles(const GiNaC::ex& e);
