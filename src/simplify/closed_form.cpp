@@ -207,15 +207,13 @@ ex collect_level(const ex& e) {
     return out;
 }
 
-// Common factors out at every level, sums' bodies included.
-struct common_out : map_function {
-    ex operator()(const ex& x) override {
-        if (is_a<index_sum>(x)) {
-            const auto& s = ex_to<index_sum>(x);
-            return make_sum((*this)(s.body()), s.indices());
-        }
-        return common_factors_out(x.map(*this));
-    }
+// `rewrite` applied bottom up to every subexpression, sums' bodies included (a sum's body is its
+// one operand).
+template <class Rewrite>
+struct bottom_up : map_function {
+    Rewrite rewrite;
+    explicit bottom_up(Rewrite r) : rewrite(std::move(r)) {}
+    ex operator()(const ex& x) override { return rewrite(x.map(*this)); }
 };
 
 bool same_triad(const std::array<ex, 3>& a, const std::array<ex, 3>& b) {
@@ -254,22 +252,11 @@ ex drop_in_product(const ex& term) {
     return out;
 }
 
-struct triangle_dropper : map_function {
-    ex operator()(const ex& x) override {
-        if (is_a<index_sum>(x)) {
-            const auto& s = ex_to<index_sum>(x);
-            return make_sum((*this)(s.body()), s.indices());
-        }
-        const ex mapped = x.map(*this);
-        return is_a<mul>(mapped) ? drop_in_product(mapped) : mapped;
-    }
-};
-
 }  // namespace
 
 ex without_implied_triangles(const ex& e) {
-    triangle_dropper d;
-    return d(e);
+    bottom_up drop([](const ex& x) { return is_a<mul>(x) ? drop_in_product(x) : x; });
+    return drop(e);
 }
 
 ex collected_terms(const ex& e) { return collect_level(e); }
@@ -277,8 +264,8 @@ ex collected_terms(const ex& e) { return collect_level(e); }
 // Triangles are dropped before common factors come out, while each still stands in one product
 // with the symbols that imply it.
 ex closed_form(const ex& e) {
-    common_out c;
-    return c(without_implied_triangles(collect_level(e)));
+    bottom_up common_out([](const ex& x) { return common_factors_out(x); });
+    return common_out(without_implied_triangles(collect_level(e)));
 }
 
 }  // namespace couplet
