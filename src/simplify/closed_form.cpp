@@ -122,9 +122,10 @@ ex common_factors_out(const ex& e) {
             continue;
         }
         std::vector<std::pair<ex, numeric>> kept;
-        for (const auto& [b, n] : common) {
-            auto it = std::find_if(here.begin(), here.end(), [&](const auto& h) { return h.first.is_equal(b); });
-            if (it != here.end()) kept.emplace_back(b, std::min(n, it->second));
+        for (const auto& entry : common) {
+            auto it = std::find_if(here.begin(), here.end(),
+                                   [&](const auto& h) { return h.first.is_equal(entry.first); });
+            if (it != here.end()) kept.emplace_back(entry.first, std::min(entry.second, it->second));
         }
         common = kept;
     }
