@@ -33,6 +33,10 @@ ex run_simplifier(const ex& e, const quantum_numbers& numbers, const execute_opt
     // The CG form is applied before verification, so that what is printed is what was checked.
     if (options.prefer_clebsch)
         result = merge_phases(reduce_phases(merge_phases(symmetry::prefer_clebsch(result)), numbers));
+    if (options.as_written) {
+        const ex rearranged = merge_phases(in_written_arrangement(result, e));
+        if (!rearranged.is_equal(result)) result = merge_phases(reduce_phases(rearranged, numbers));
+    }
     return result;
 }
 

@@ -29,6 +29,7 @@ struct execute_options {
     verify::progress_callback progress;
     verify::simplifier_function simplifier;  // empty: simplify_expression
     bool prefer_clebsch = false;             // print results with CG instead of 3j symbols
+    bool as_written = false;                 // a 6j or 9j the input wrote keeps its arrangement
     bool show_steps = false;                 // add the applied moves and rules to simplify's record
 };
 

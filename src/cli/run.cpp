@@ -72,7 +72,7 @@ std::string conventions_text() { return conventions_text_head + bounds_text() + 
 
 struct request {
     std::string command, file, text, format = "text";
-    bool has_text = false, fragment = false, no_verify = false, steps = false;
+    bool has_text = false, fragment = false, no_verify = false, steps = false, as_written = false;
     int depth = 2, samples = 200;
     std::string prefer = "3j";
     std::size_t max_terms = run_limits{}.max_terms;
@@ -97,6 +97,9 @@ void add_common_options(CLI::App& sub, request& r) {
     sub.add_flag("--no-verify", r.no_verify, "Print simplifications without checking them against the input");
     sub.add_option("--prefer", r.prefer, "Write results with 3j symbols (default) or Clebsch-Gordan coefficients")
         ->check(CLI::IsMember({"3j", "cg"}));
+    sub.add_flag("--as-written", r.as_written,
+                 "Keep each 6j and 9j of the input in the input's arrangement (default: the canonical one, the "
+                 "same in every file)");
     sub.add_option("--max-terms", r.max_terms,
                    "Refuse to expand an expression into more than N terms (default 100000)")
         ->check(CLI::Range(std::size_t{1}, std::size_t{1000000000}));
@@ -211,6 +214,7 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         options.sampling.samples = r.samples;
         options.verify_simplify = !r.no_verify;
         options.prefer_clebsch = r.prefer == "cg";
+        options.as_written = r.as_written;
         options.show_steps = r.steps;
         options.limit_verification_time = !explicit_sampling;
         // Progress goes to a terminal only: piped or captured stderr stays clean.

@@ -6,6 +6,7 @@
 
 #include "couplet/model/structure.hpp"
 #include "couplet/model/symbols.hpp"
+#include "couplet/symmetry/symmetries.hpp"
 
 namespace couplet {
 
@@ -261,6 +262,25 @@ ex without_implied_triangles(const ex& e) {
 }
 
 ex collected_terms(const ex& e) { return collect_level(e); }
+
+ex in_written_arrangement(const ex& result, const ex& input) {
+    std::vector<ex> written;
+    for (const_preorder_iterator it = input.preorder_begin(); it != input.preorder_end(); ++it) {
+        const symbol_kind k = kind_of(*it);
+        if (k == symbol_kind::sixj || k == symbol_kind::ninej) written.push_back(*it);
+    }
+    if (written.empty()) return result;
+    bottom_up rearrange([&](const ex& x) -> ex {
+        const symbol_kind k = kind_of(x);
+        if (k != symbol_kind::sixj && k != symbol_kind::ninej) return x;
+        const auto images = k == symbol_kind::sixj ? symmetry::sixj_orbit(x) : symmetry::ninej_orbit(x);
+        for (const ex& w : written)
+            for (const auto& image : images)
+                if (image.symbol.is_equal(w)) return make_phase(image.phase) * image.symbol;
+        return x;
+    });
+    return rearrange(result);
+}
 
 // Triangles are dropped before common factors come out, while each still stands in one product
 // with the symbols that imply it.

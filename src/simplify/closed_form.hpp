@@ -12,6 +12,11 @@ namespace couplet {
 
 GiNaC::ex closed_form(const GiNaC::ex& e);
 
+// Every 6j and 9j of `result` that is a symmetric image of one the input wrote, in the input's
+// arrangement (times the phase the symmetry costs; none for a 6j): a user who wrote
+// {j1 J j2; J' j1' k} reads it back so.  Symbols the reduction made keep the canonical one.
+GiNaC::ex in_written_arrangement(const GiNaC::ex& result, const GiNaC::ex& input);
+
 // Only the collection: like terms collected with their coefficients factored, sums over the
 // same indices joined.  For showing a step's terms as written, triangles and all.
 GiNaC::ex collected_terms(const GiNaC::ex& e);

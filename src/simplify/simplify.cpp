@@ -89,7 +89,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     if (!never_worse(x, input)) {
         steps_taken.push_back({"the input's own form kept", "no reduction with fewer terms, sums and symbols",
                                x, input});
-        return input;
+        x = input;
     }
     return x;
 }

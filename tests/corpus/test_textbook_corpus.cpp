@@ -54,3 +54,23 @@ TEST_CASE("the form comparison tells a wrong phase, a missing factor and an extr
     // split, and (-1)^(2j12+2J+2j3) = 1 by the 6j's triad (j3 J j12).
     CHECK(compare_forms(st[4].value, st[0].value, program.numbers).same);
 }
+
+TEST_CASE("a 6j and a 9j keep the arrangement the input used under --as-written", "[corpus][cli]") {
+    // The 6j of Edmonds (1957) eq. 7.1.7 as printed there (from memory), and an odd row
+    // permutation of a 9j, which costs (-1)^(sum of all nine) (DLMF 34.6 symmetries, common
+    // practice, no source): kept as written, the value verified, the phase only where one costs.
+    auto six = run_cli({"simplify", "--as-written", "--format", "json", "-e",
+                        "(2*J+1) * 6j{j1, J, j2; Jp, j1p, k} * sum(x : (2*x+1) * tri(a, b, x))"});
+    REQUIRE(six.code == 0);
+    auto r = nlohmann::json::parse(six.out);
+    CHECK(r["verified"] == true);
+    CHECK(r["result"].get<std::string>().find("6j{j1, J, j2; Jp, j1p, k}") != std::string::npos);
+    auto canonical = run_cli({"simplify", "-e", "6j{j1, J, j2; Jp, j1p, k}"});
+    CHECK(canonical.out.find("6j{j1, J, j2; Jp, j1p, k}") == std::string::npos);
+    auto nine = run_cli({"simplify", "--as-written", "--format", "json", "-e",
+                         "(-1)^(a+b+c+d+e+f+g+h+i) * 9j{a, b, c; d, e, f; g, h, i}"});
+    REQUIRE(nine.code == 0);
+    auto n = nlohmann::json::parse(nine.out);
+    CHECK(n["verified"] == true);
+    CHECK(n["result"] == "(-1)^(a+b+c+d+e+f+g+h+i)*9j{a, b, c; d, e, f; g, h, i}");
+}
