@@ -29,7 +29,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
 
 // e without any identity applied: every symbol in its canonical arrangement, phases merged and
 // reduced, like terms collected, implied triangles dropped.  An answer of simplify_expression
-// never has more terms, sums or coupling symbols than this form of its input.
+// is never worse than this form of its input: not more sums, then symbols, then terms.
 GiNaC::ex canonical_form(const GiNaC::ex& e, const quantum_numbers& numbers);
 
 // The steps of the last simplify_expression call on this thread, in order, for the

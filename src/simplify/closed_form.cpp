@@ -29,17 +29,19 @@ bool is_polynomial(const ex& e) {
     return false;
 }
 
-// Expansion of the top level only: sums, roots and the coupling symbols are held as atoms, so
-// a summand or a root is not multiplied out along with the products around it.
+// Expansion of the top level only: sums, roots, phases and polynomial factors such as (2x+1) are
+// held as atoms, so that a summand, a root or a product of weights is not multiplied out along
+// with the products around it (a product of n weights would become 2^n monomials).
 ex expand_top_level(const ex& e) {
-    exmap atoms, back;
+    exmap back;
     struct holder : map_function {
-        exmap& atoms;
         exmap& back;
-        holder(exmap& a, exmap& b) : atoms(a), back(b) {}
+        const ex& top;
+        holder(exmap& b, const ex& t) : back(b), top(t) {}
         ex operator()(const ex& x) override {
             const bool root = is_a<power>(x) && is_a<numeric>(x.op(1)) && !ex_to<numeric>(x.op(1)).is_integer();
-            if (is_a<index_sum>(x) || root || is_a<phase_factor>(x)) {
+            const bool weight = is_a<add>(x) && is_polynomial(x) && !x.is_equal(top);
+            if (is_a<index_sum>(x) || root || is_a<phase_factor>(x) || weight) {
                 for (const auto& [a, v] : back)
                     if (v.is_equal(x)) return a;
                 ex a = symbol("#atom" + std::to_string(back.size() + 1));
@@ -48,7 +50,7 @@ ex expand_top_level(const ex& e) {
             }
             return x.map(*this);
         }
-    } h(atoms, back);
+    } h(back, e);
     return h(e).expand().subs(back, subs_options::no_pattern);
 }
 
@@ -195,12 +197,14 @@ ex collect_level(const ex& e) {
             ++it->members;
         }
     }
+    // A coefficient is multiplied out and factored only where terms were collected into it.
+    auto collected = [](const group& g) { return g.members == 1 ? g.coefficient : factor(g.coefficient.expand()); };
     ex out = 0;
     for (const group& g : groups) {
         if (g.sum.is_zero()) {
-            out += factor(g.coefficient.expand()) * g.structure;
+            out += collected(g) * g.structure;
         } else if (g.members == 1) {
-            out += factor(g.coefficient.expand()) * g.structure * g.sum;
+            out += collected(g) * g.structure * g.sum;
         } else {
             const lst& indices = ex_to<index_sum>(g.sum).indices();
             out += g.structure * make_sum(collect_level(g.bodies), indices);

@@ -1,5 +1,7 @@
 #include "couplet/simplify.hpp"
 
+#include <tuple>
+
 #include "couplet/model/normalize.hpp"
 #include "couplet/model/result_shape.hpp"
 #include "couplet/model/symbols.hpp"
@@ -26,12 +28,16 @@ void record_network_steps(const std::vector<network::reduction_step>& moves, con
     for (const auto& m : moves)
         steps_taken.push_back({m.move, m.reference, weights.thaw(m.before), weights.thaw(m.after)});
 }
+
 int term_count(const ex& e) { return is_a<GiNaC::add>(e) ? static_cast<int>(e.nops()) : 1; }
 
-// An answer never has more terms, sums or coupling symbols than the input's own form.
+// An answer is never worse than the input's own form: not more sums; with as many sums, not
+// more coupling symbols; with as many of both, not more terms.  (A reduction may trade m-sums for
+// 6j symbols, as the interchange move does; it may not come back longer than it went in.)
 bool never_worse(const ex& answer, const ex& input) {
     const result_shape a = shape_of(answer), i = shape_of(input);
-    return term_count(answer) <= term_count(input) && a.indices <= i.indices && a.symbols() <= i.symbols();
+    return std::make_tuple(a.indices, a.symbols(), term_count(answer)) <=
+           std::make_tuple(i.indices, i.symbols(), term_count(input));
 }
 
 }  // namespace
@@ -57,6 +63,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
                                            GiNaC::wild(4), GiNaC::wild(5)));
     const ex written = x;
     x = symmetry::canonicalize_symbols(x, numbers);
+    const ex arranged = x;
     if (has_clebsch)
         steps_taken.push_back({"Clebsch-Gordan coefficients as 3j symbols", "DLMF 34.1.1", written, merge_phases(x)});
     std::vector<network::reduction_step> completeness;
@@ -85,8 +92,10 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
         steps_taken.push_back({"like terms collected, implied triangles dropped", "common practice, no source", x,
                                closed, true});
     x = closed;
-    const ex input = canonical_form(e, numbers);
-    if (!never_worse(x, input)) {
+    // Counted on the input as canonicalized at the start (its phases do not change the counts);
+    // the full canonical form, phases reduced, only when it is the answer.
+    if (!never_worse(x, closed_form(merge_phases(arranged)))) {
+        const ex input = canonical_form(e, numbers);
         steps_taken.push_back({"the input's own form kept", "no reduction with fewer terms, sums and symbols",
                                x, input});
         x = input;
