@@ -48,13 +48,16 @@ bool touches(const ex& e, const std::set<std::string>& names, const quantum_numb
 
 }  // namespace
 
+// The placeholder wraps its weight in a function, not a new symbol: a new name would enter every
+// phase lattice the m-sum stage builds (one more variable each, measurably slower), while the
+// names inside a weight are the expression's own.  Expansion does not enter a function.
+DECLARE_FUNCTION_1P(held_weight)
+static ex held_weight_eval(const ex& w) { return held_weight(w).hold(); }
+REGISTER_FUNCTION(held_weight, eval_func(held_weight_eval))
+
 ex frozen_weights::placeholder_for(const ex& weight) {
-    for (const auto& [placeholder, w] : to_weight_)
-        if (w.is_equal(weight)) return placeholder;
-    // '#' starts a comment in the language, so no user name can take this form.
-    ex placeholder = symbol("#weight" + std::to_string(to_weight_.size() + 1));
+    ex placeholder = held_weight(weight).hold();
     to_weight_[placeholder] = weight;
-    to_placeholder_[weight] = placeholder;
     return placeholder;
 }
 

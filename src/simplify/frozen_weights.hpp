@@ -13,7 +13,7 @@ namespace couplet {
 
 class frozen_weights {
 public:
-    // e with each such weight replaced by a placeholder symbol (one per distinct weight).
+    // e with each such weight replaced by an opaque placeholder.
     GiNaC::ex freeze(const GiNaC::ex& e, const quantum_numbers& numbers);
     // The weights back in place of their placeholders.
     GiNaC::ex thaw(const GiNaC::ex& e) const;
@@ -21,7 +21,6 @@ public:
 private:
     GiNaC::ex placeholder_for(const GiNaC::ex& weight);
     GiNaC::exmap to_weight_;
-    GiNaC::exmap to_placeholder_;
 };
 
 }  // namespace couplet
