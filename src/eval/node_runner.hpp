@@ -32,12 +32,17 @@ public:
                 }
                 return s;
             }
-            case node_kind::power: return exact::power(run(*n.children[0]), n.exponent);
+            case node_kind::power: {
+                exact::number base = run(*n.children[0]);
+                if (n.exponent < 0 && base.is_zero()) throw division_by_zero(n);
+                return exact::power(base, n.exponent);
+            }
             case node_kind::root_power: {
                 exact::number base = run(*n.children[0]);
                 if (!base.is_rational() || cln::minusp(base.rational_value()))
                     throw evaluation_error("sqrt of " + base.to_string() + " (in " + n.text +
                                            ") is not a real square root of a rational");
+                if (n.exponent < 0 && base.is_zero()) throw division_by_zero(n);
                 return exact::power(exact::number::sqrt_of(base.rational_value()), n.exponent);
             }
             case node_kind::phase: return exact::number(self().phase_is_odd(n.forms[0]) ? -1L : 1L);
@@ -56,6 +61,12 @@ protected:
 
 private:
     Values& self() { return static_cast<Values&>(*this); }
+
+    // Every division reaches here as a negative power, so this one error covers 1/x, x^-1,
+    // 1/sum(...) and roots of them, whatever the divisor is: a symbol, a sum or a name.
+    static evaluation_error division_by_zero(const node& n) {
+        return evaluation_error("division by zero: the divisor of " + n.text + " is 0 here");
+    }
 
     exact::number coupling_symbol(const node& n) {
         symbol_memo::key t{};
