@@ -4,6 +4,12 @@
 
 namespace couplet::cli {
 
+// Input text is echoed in the records (statements, messages); a byte that is not UTF-8 becomes
+// U+FFFD instead of stopping the JSON library.
+std::string json_line(const nlohmann::json& record) {
+    return record.dump(-1, ' ', false, nlohmann::json::error_handler_t::replace);
+}
+
 void reporter::begin() {
     if (format_ == "latex") latex_.begin();
 }
@@ -16,7 +22,7 @@ void reporter::statement(const source_file& src, const lowered_statement& s, con
     const nlohmann::json& r = o.record;
     if (r.is_null()) return;
     if (format_ == "json") {
-        out_ << r.dump() << "\n";
+        out_ << json_line(r) << "\n";
         return;
     }
     out_ << r.at("result").get<std::string>();
@@ -43,7 +49,7 @@ void reporter::error(const source_file& src, const user_error& e) {
     err_ << format_diagnostic(src, e);
     if (format_ == "json") {
         auto pos = src.locate(e.offset());
-        out_ << nlohmann::json{{"error", e.what()}, {"line", pos.line}, {"column", pos.column}}.dump()
+        out_ << json_line(nlohmann::json{{"error", e.what()}, {"line", pos.line}, {"column", pos.column}})
              << "\n";
     }
 }

@@ -11,6 +11,9 @@
 
 namespace couplet::cli {
 
+// One JSON record as one line, valid whatever bytes the input held.
+std::string json_line(const nlohmann::json& record);
+
 class reporter {
 public:
     // format: "text", "latex" or "json"; document: wrap LaTeX in a complete document.

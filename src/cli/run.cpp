@@ -240,6 +240,9 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
                 o = execute(s, program, bare, options);
             } catch (const refusal& e) {
                 throw user_error(s.span.begin, e.what());
+            } catch (const std::overflow_error& e) {
+                // The phase algebra works in 64-bit integers; coefficients beyond that are refused.
+                throw user_error(s.span.begin, std::string("refused: numbers too large here: ") + e.what());
             } catch (const time_limit_reached&) {
                 throw user_error(s.span.begin, stopped_message(r.time_limit, k, statements.size() - k - 1));
             }

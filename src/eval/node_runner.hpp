@@ -43,7 +43,13 @@ public:
                     throw evaluation_error("sqrt of " + base.to_string() + " (in " + n.text +
                                            ") is not a real square root of a rational");
                 if (n.exponent < 0 && base.is_zero()) throw division_by_zero(n);
-                return exact::power(exact::number::sqrt_of(base.rational_value()), n.exponent);
+                exact::number root;
+                try {
+                    root = exact::number::sqrt_of(base.rational_value());
+                } catch (const std::domain_error& e) {
+                    throw evaluation_error("sqrt in " + n.text + " of a number too large to take apart: " + e.what());
+                }
+                return exact::power(root, n.exponent);
             }
             case node_kind::phase: return exact::number(self().phase_is_odd(n.forms[0]) ? -1L : 1L);
             case node_kind::delta: return exact::number(self().equal(n.forms[0], n.forms[1]) ? 1L : 0L);
