@@ -8,15 +8,12 @@
 #include <string>
 
 #include "couplet/model/lower.hpp"
+#include "couplet/model/result_shape.hpp"
 #include "couplet/simplify.hpp"
 #include "network/network_points.hpp"
 #include "network/random_network.hpp"
 
 using namespace couplet;
-
-namespace {
-int term_count(const GiNaC::ex& e) { return GiNaC::is_a<GiNaC::add>(e) ? static_cast<int>(e.nops()) : 1; }
-}  // namespace
 
 int main(int argc, char** argv) {
     const int count = argc > 1 ? std::atoi(argv[1]) : 10000;

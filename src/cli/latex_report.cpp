@@ -2,6 +2,7 @@
 
 #include <sstream>
 
+#include "couplet/model/rewrite.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/print/print.hpp"
 #include "couplet/print/step_change.hpp"
@@ -11,23 +12,6 @@ namespace couplet::cli {
 using GiNaC::ex;
 
 namespace {
-
-// e with `target` replaced by `by` wherever it stands as a whole, sums' bodies included.
-ex replaced(const ex& e, const ex& target, const ex& by) {
-    if (e.is_equal(target)) return by;
-    if (GiNaC::is_a<index_sum>(e)) {
-        const auto& s = GiNaC::ex_to<index_sum>(e);
-        return make_sum(replaced(s.body(), target, by), s.indices());
-    }
-    if (GiNaC::is_a<GiNaC::add>(e) || GiNaC::is_a<GiNaC::mul>(e) || GiNaC::is_a<GiNaC::power>(e)) {
-        GiNaC::exvector ops;
-        for (const ex& o : e) ops.push_back(replaced(o, target, by));
-        if (GiNaC::is_a<GiNaC::add>(e)) return GiNaC::add(ops);
-        if (GiNaC::is_a<GiNaC::mul>(e)) return GiNaC::mul(ops);
-        return GiNaC::pow(ops[0], ops[1]);
-    }
-    return e;
-}
 
 bool has_triangle(const ex& e) {
     for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it)

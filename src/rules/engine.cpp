@@ -8,6 +8,7 @@
 
 #include "couplet/model/fresh_index.hpp"
 #include "couplet/model/normalize.hpp"
+#include "couplet/model/rewrite.hpp"
 #include "couplet/model/result_shape.hpp"
 #include "couplet/run_limits.hpp"
 #include "couplet/model/symbols.hpp"
@@ -33,38 +34,10 @@ ex product_of(const std::vector<ex>& factors) {
     return out;
 }
 
-// Rebuilds e with `target` replaced by `replacement`, also inside sums (whose own subs keeps
-// away from anything that mentions an index).
-ex replace(const ex& e, const ex& target, const ex& replacement) {
-    if (e.is_equal(target)) return replacement;
-    if (is_a<index_sum>(e)) {
-        const auto& s = ex_to<index_sum>(e);
-        return make_sum(replace(s.body(), target, replacement), s.indices());
-    }
-    if (is_a<add>(e) || is_a<mul>(e) || is_a<power>(e)) {
-        exvector ops;
-        for (const ex& o : e) ops.push_back(replace(o, target, replacement));
-        if (is_a<add>(e)) return add(ops);
-        if (is_a<mul>(e)) return mul(ops);
-        return pow(ops[0], ops[1]);
-    }
-    return e;
-}
-
-bool is_polynomial_factor(const ex& f) {
-    if (is_a<numeric>(f) || is_a<symbol>(f)) return true;
-    // Roots stay with the structure: factor() cannot see through them.
-    if (is_a<power>(f))
-        return is_polynomial_factor(f.op(0)) && is_a<numeric>(f.op(1)) && ex_to<numeric>(f.op(1)).is_pos_integer();
-    if (is_a<add>(f)) return std::all_of(f.begin(), f.end(), [](const ex& t) { return is_polynomial_factor(t); });
-    if (is_a<mul>(f)) return std::all_of(f.begin(), f.end(), [](const ex& t) { return is_polynomial_factor(t); });
-    return false;
-}
-
 ex without_polynomial_factors(const ex& term) {
     ex out = 1;
     for (const ex& f : factors_of(term))
-        if (!is_polynomial_factor(f)) out *= f;
+        if (!is_polynomial(f)) out *= f;  // roots stay with the structure: factor() cannot see through them
     return out;
 }
 
@@ -75,7 +48,7 @@ ex regroup(const ex& body) {
     std::vector<std::pair<ex, ex>> groups;  // structure, coefficient
     for (const ex& term : body) {
         ex coefficient = 1, structure = 1;
-        for (const ex& f : factors_of(term)) (is_polynomial_factor(f) ? coefficient : structure) *= f;
+        for (const ex& f : factors_of(term)) (is_polynomial(f) ? coefficient : structure) *= f;
         auto it = std::find_if(groups.begin(), groups.end(),
                                [&](const auto& g) { return g.first.is_equal(structure); });
         if (it == groups.end())
@@ -250,7 +223,7 @@ private:
         for (const_preorder_iterator it = term.preorder_begin(); it != term.preorder_end(); ++it) {
             for (const local_rule& r : local_rules()) {
                 if (auto rewritten = match_local_rule(r, *it)) {
-                    ex after = replace(term, *it, *rewritten);
+                    ex after = replaced(term, *it, *rewritten);
                     record(r.name, r.reference, term, after);
                     return after;
                 }

@@ -4,6 +4,7 @@
 #include <array>
 #include <vector>
 
+#include "couplet/model/rewrite.hpp"
 #include "couplet/model/structure.hpp"
 #include "couplet/model/symbols.hpp"
 #include "couplet/symmetry/symmetries.hpp"
@@ -17,16 +18,6 @@ namespace {
 std::vector<ex> factors(const ex& term) {
     if (is_a<mul>(term)) return {term.begin(), term.end()};
     return {term};
-}
-
-bool is_polynomial(const ex& e) {
-    if (is_a<numeric>(e)) return ex_to<numeric>(e).is_rational();
-    if (is_a<symbol>(e)) return true;
-    if (is_a<add>(e) || is_a<mul>(e))
-        return std::all_of(e.begin(), e.end(), [](const ex& o) { return is_polynomial(o); });
-    if (is_a<power>(e))
-        return is_polynomial(e.op(0)) && is_a<numeric>(e.op(1)) && ex_to<numeric>(e.op(1)).is_pos_integer();
-    return false;
 }
 
 // Expansion of the top level only: sums, roots, phases and polynomial factors such as (2x+1) are

@@ -3,6 +3,7 @@
 #include <set>
 #include <string>
 
+#include "couplet/model/rewrite.hpp"
 #include "couplet/model/symbols.hpp"
 
 namespace couplet {
@@ -10,18 +11,6 @@ namespace couplet {
 using namespace GiNaC;
 
 namespace {
-
-bool is_polynomial(const ex& e) {
-    if (is_a<numeric>(e) || is_a<symbol>(e)) return true;
-    if (is_a<add>(e) || is_a<mul>(e)) {
-        for (const ex& o : e)
-            if (!is_polynomial(o)) return false;
-        return true;
-    }
-    if (is_a<power>(e))
-        return is_polynomial(e.op(0)) && is_a<numeric>(e.op(1)) && ex_to<numeric>(e.op(1)).is_pos_integer();
-    return false;
-}
 
 // A factor that expansion would split or multiply out: a polynomial that is not a monomial,
 // any power of one, or a root of a polynomial.

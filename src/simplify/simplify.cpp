@@ -29,8 +29,6 @@ void record_network_steps(const std::vector<network::reduction_step>& moves, con
         steps_taken.push_back({m.move, m.reference, weights.thaw(m.before), weights.thaw(m.after)});
 }
 
-int term_count(const ex& e) { return is_a<GiNaC::add>(e) ? static_cast<int>(e.nops()) : 1; }
-
 // An answer is never worse than the input's own form: not more sums; with as many sums, not
 // more coupling symbols; with as many of both, not more terms.  (A reduction may trade m-sums for
 // 6j symbols, as the interchange move does; it may not come back longer than it went in.)

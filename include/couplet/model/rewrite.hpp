@@ -1,0 +1,16 @@
+// Two small tools the stages share for rewriting expressions that may hold sums.
+#pragma once
+
+#include <ginac/ginac.h>
+
+namespace couplet {
+
+// A polynomial in names: numbers, names, sums and products of them, positive integer powers.
+// Such a factor is a weight like (2x+1) or a coefficient, never a coupling structure.
+bool is_polynomial(const GiNaC::ex& e);
+
+// e with every occurrence of `target` as a whole replaced by `by`, also inside sums (whose own
+// subs does not look at the sum itself).
+GiNaC::ex replaced(const GiNaC::ex& e, const GiNaC::ex& target, const GiNaC::ex& by);
+
+}  // namespace couplet
