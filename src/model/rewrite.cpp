@@ -8,6 +8,16 @@ namespace couplet {
 
 using namespace GiNaC;
 
+std::vector<ex> terms_of(const ex& e) {
+    if (is_a<add>(e)) return {e.begin(), e.end()};
+    return {e};
+}
+
+std::vector<ex> factors_of(const ex& term) {
+    if (is_a<mul>(term)) return {term.begin(), term.end()};
+    return {term};
+}
+
 bool is_polynomial(const ex& e) {
     if (is_a<numeric>(e) || is_a<symbol>(e)) return true;
     if (is_a<add>(e) || is_a<mul>(e))

@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <vector>
 
+#include "couplet/model/rewrite.hpp"
 #include "couplet/model/symbols.hpp"
 
 namespace couplet {
@@ -20,11 +21,6 @@ opened open_sum(const ex& e) {
     if (!is_a<index_sum>(e)) return {{}, e};
     const auto& s = ex_to<index_sum>(e);
     return {{s.indices().begin(), s.indices().end()}, s.body()};
-}
-
-std::vector<ex> factors(const ex& e) {
-    if (is_a<mul>(e)) return {e.begin(), e.end()};
-    return {e};
 }
 
 bool holds(const std::vector<ex>& list, const ex& x) {
@@ -48,9 +44,9 @@ std::pair<ex, ex> changed_parts(const ex& before, const ex& after) {
         if (!holds(a.indices, i)) only_before.push_back(i), moving.push_back(i);
     for (const ex& i : a.indices)
         if (!holds(b.indices, i)) only_after.push_back(i), moving.push_back(i);
-    std::vector<ex> rest_after = factors(a.body);
+    std::vector<ex> rest_after = factors_of(a.body);
     ex kept_before = 1, kept_after = 1;
-    for (const ex& f : factors(b.body)) {
+    for (const ex& f : factors_of(b.body)) {
         const bool touches = std::any_of(moving.begin(), moving.end(), [&](const ex& i) { return f.has(i); });
         auto same = std::find_if(rest_after.begin(), rest_after.end(), [&](const ex& g) { return g.is_equal(f); });
         if (!touches && same != rest_after.end() && !is_a<numeric>(f)) {

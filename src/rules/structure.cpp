@@ -81,24 +81,6 @@ std::vector<symmetry::transformed> arrangements(const ex& s) {
     }
 }
 
-std::vector<ex> terms_of(const ex& e) {
-    std::vector<ex> out;
-    if (is_a<add>(e))
-        for (const ex& t : e) out.push_back(t);
-    else
-        out.push_back(e);
-    return out;
-}
-
-std::vector<ex> factors_of(const ex& term) {
-    std::vector<ex> out;
-    if (is_a<mul>(term))
-        for (const ex& f : term) out.push_back(f);
-    else
-        out.push_back(term);
-    return out;
-}
-
 phase::linear_form form_of(const ex& e) { return linear_form_of(e); }
 
 phase::context context_for(const ex& term, const quantum_numbers& numbers, const std::optional<symbol>& loose) {

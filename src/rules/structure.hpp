@@ -9,6 +9,7 @@
 #include <vector>
 
 #include "couplet/model/quantum.hpp"
+#include "couplet/model/rewrite.hpp"
 #include "couplet/phase/context.hpp"
 #include "couplet/symmetry/symmetries.hpp"
 
@@ -25,10 +26,9 @@ std::vector<triad> all_triads(const GiNaC::ex& e);
 // or tri (6, no phase), as symbol == (-1)^phase * arrangement.
 std::vector<symmetry::transformed> arrangements(const GiNaC::ex& symbol);
 
-// Terms of a sum (a single term is a sum of one).
-std::vector<GiNaC::ex> terms_of(const GiNaC::ex& e);
-// Factors of a product (a single factor is a product of one).
-std::vector<GiNaC::ex> factors_of(const GiNaC::ex& term);
+// Terms of a sum, factors of a product (model/rewrite.hpp).
+using couplet::factors_of;
+using couplet::terms_of;
 
 // The phase group of a term: declared parities and the triads of its symbols.  `loose`, when
 // given, is declared with unknown parity, so that what its triads alone imply can be asked.

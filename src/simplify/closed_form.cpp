@@ -15,11 +15,6 @@ using namespace GiNaC;
 
 namespace {
 
-std::vector<ex> factors(const ex& term) {
-    if (is_a<mul>(term)) return {term.begin(), term.end()};
-    return {term};
-}
-
 // Expansion of the top level only: sums, roots, phases and polynomial factors such as (2x+1) are
 // held as atoms, so that a summand, a root or a product of weights is not multiplied out along
 // with the products around it (a product of n weights would become 2^n monomials).
@@ -52,16 +47,15 @@ struct split_term {
 
 split_term split(const ex& term) {
     split_term out;
-    for (const ex& f : factors(term)) (is_polynomial(f) ? out.coefficient : out.structure) *= f;
+    for (const ex& f : factors_of(term)) (is_polynomial(f) ? out.coefficient : out.structure) *= f;
     return out;
 }
 
-// The single sum among a structure's factors, with the rest, when the rest does not mention
-// the sum's indices.
+// Whether exactly one of a structure's factors is a sum: that sum, and the product of the rest.
 bool single_sum(const ex& structure, ex& sum, ex& rest) {
     int count = 0;
     rest = 1;
-    for (const ex& f : factors(structure)) {
+    for (const ex& f : factors_of(structure)) {
         if (is_a<index_sum>(f)) {
             sum = f;
             ++count;
@@ -69,8 +63,7 @@ bool single_sum(const ex& structure, ex& sum, ex& rest) {
             rest *= f;
         }
     }
-    if (count != 1) return false;
-    return true;
+    return count == 1;
 }
 
 // Whether a sum can take `outside` into its summand without capturing a name.
@@ -105,7 +98,7 @@ ex common_factors_out(const ex& e) {
     bool first = true;
     for (const ex& t : e) {
         std::vector<std::pair<ex, numeric>> here;
-        for (const ex& f : factors(t)) {
+        for (const ex& f : factors_of(t)) {
             ex b;
             numeric n;
             if (positive_power(f, b, n)) here.emplace_back(b, n);
@@ -151,9 +144,7 @@ struct inner_sums : map_function {
 ex collect_level(const ex& e) {
     inner_sums inner;
     const ex x = expand_top_level(inner(e));
-    std::vector<ex> terms;
-    if (is_a<add>(x)) terms.assign(x.begin(), x.end());
-    else terms.push_back(x);
+    const std::vector<ex> terms = terms_of(x);
 
     struct group {
         ex structure;  // for a joined sum: the factors outside it
@@ -227,7 +218,7 @@ ex base_of(const ex& f) {
 }
 
 ex drop_in_product(const ex& term) {
-    const std::vector<ex> fs = factors(term);
+    const std::vector<ex> fs = factors_of(term);
     coupling_structure imposed;
     for (const ex& f : fs) {
         const symbol_kind k = kind_of(base_of(f));

@@ -44,19 +44,12 @@ DECLARE_FUNCTION_1P(held_weight)
 static ex held_weight_eval(const ex& w) { return held_weight(w).hold(); }
 REGISTER_FUNCTION(held_weight, eval_func(held_weight_eval))
 
-ex frozen_weights::placeholder_for(const ex& weight) {
-    ex placeholder = held_weight(weight).hold();
-    to_weight_[placeholder] = weight;
-    return placeholder;
-}
-
-ex frozen_weights::freeze(const ex& e, const quantum_numbers& numbers) {
+ex freeze_weights(const ex& e, const quantum_numbers& numbers) {
     struct walker {
-        frozen_weights& self;
         const quantum_numbers& numbers;
         std::set<std::string> bound;
         ex operator()(const ex& x) {
-            if (is_weight(x) && !touches(x, bound, numbers)) return self.placeholder_for(x);
+            if (is_weight(x) && !touches(x, bound, numbers)) return held_weight(x).hold();
             if (is_a<index_sum>(x)) {
                 const auto& s = ex_to<index_sum>(x);
                 std::set<std::string> outer = bound;
@@ -75,13 +68,18 @@ ex frozen_weights::freeze(const ex& e, const quantum_numbers& numbers) {
             return x;
         }
     };
-    walker w{*this, numbers, {}};
+    walker w{numbers, {}};
     return w(e);
 }
 
-ex frozen_weights::thaw(const ex& e) const {
-    if (to_weight_.empty()) return e;
-    return e.subs(to_weight_, subs_options::no_pattern);
+ex thaw_weights(const ex& e) {
+    struct thaw : map_function {
+        ex operator()(const ex& x) override {
+            if (is_ex_the_function(x, held_weight)) return x.op(0);
+            return x.map(*this);  // a sum's body is its operand
+        }
+    } t;
+    return t(e);
 }
 
 }  // namespace couplet

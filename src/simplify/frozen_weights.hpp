@@ -11,16 +11,9 @@
 
 namespace couplet {
 
-class frozen_weights {
-public:
-    // e with each such weight replaced by an opaque placeholder.
-    GiNaC::ex freeze(const GiNaC::ex& e, const quantum_numbers& numbers);
-    // The weights back in place of their placeholders.
-    GiNaC::ex thaw(const GiNaC::ex& e) const;
-
-private:
-    GiNaC::ex placeholder_for(const GiNaC::ex& weight);
-    GiNaC::exmap to_weight_;
-};
+// e with each such weight replaced by an opaque placeholder that holds it.
+GiNaC::ex freeze_weights(const GiNaC::ex& e, const quantum_numbers& numbers);
+// Every placeholder replaced by the weight it holds (e unchanged where there is none).
+GiNaC::ex thaw_weights(const GiNaC::ex& e);
 
 }  // namespace couplet

@@ -5,7 +5,6 @@
 #include "couplet/model/normalize.hpp"
 #include "couplet/model/result_shape.hpp"
 #include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
 #include "couplet/network/completeness.hpp"
 #include "couplet/network/reduce.hpp"
 #include "couplet/run_limits.hpp"
@@ -24,9 +23,9 @@ using GiNaC::is_a;
 namespace {
 thread_local std::vector<simplification_step> steps_taken;
 
-void record_network_steps(const std::vector<network::reduction_step>& moves, const frozen_weights& weights) {
+void record_network_steps(const std::vector<network::reduction_step>& moves) {
     for (const auto& m : moves)
-        steps_taken.push_back({m.move, m.reference, weights.thaw(m.before), weights.thaw(m.after)});
+        steps_taken.push_back({m.move, m.reference, thaw_weights(m.before), thaw_weights(m.after)});
 }
 
 // An answer is never worse than the input's own form: not more sums; with as many sums, not
@@ -38,16 +37,21 @@ bool never_worse(const ex& answer, const ex& input) {
            std::make_tuple(i.indices, i.symbols(), term_count(input));
 }
 
-}  // namespace
-
-ex canonical_form(const ex& e, const quantum_numbers& numbers) {
-    ex x = merge_phases(symmetry::canonicalize_symbols(normalize(e), numbers));
+// The canonical form (canonical_form) of an input whose symbols are already arranged.
+ex canonical_form_of_arranged(const ex& arranged, const quantum_numbers& numbers) {
+    ex x = merge_phases(arranged);
     try {
         x = reduce_phases(x, numbers);
     } catch (const phase_not_integer&) {
         // Left as written: whether such a phase is acceptable is for the pipeline to say.
     }
     return closed_form(merge_phases(x));
+}
+
+}  // namespace
+
+ex canonical_form(const ex& e, const quantum_numbers& numbers) {
+    return canonical_form_of_arranged(symmetry::canonicalize_symbols(normalize(e), numbers), numbers);
 }
 
 const std::vector<simplification_step>& last_simplification_steps() { return steps_taken; }
@@ -66,21 +70,19 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
         steps_taken.push_back({"Clebsch-Gordan coefficients as 3j symbols", "DLMF 34.1.1", written, merge_phases(x)});
     std::vector<network::reduction_step> completeness;
     x = network::reduce_completeness(x, numbers, &completeness);
-    record_network_steps(completeness, frozen_weights());
+    record_network_steps(completeness);
     x = nest_projection_sums(x, numbers);
     check_expansion(x);
-    frozen_weights weights;
-    x = merge_phases(weights.freeze(x, numbers).expand());
+    x = merge_phases(freeze_weights(x, numbers).expand());
     check_deadline();
     std::vector<network::reduction_step> moves;
-    x = weights.thaw(network::reduce_msums(x, numbers, &moves));
-    record_network_steps(moves, weights);
+    x = thaw_weights(network::reduce_msums(x, numbers, &moves));
+    record_network_steps(moves);
     check_deadline();
     const ex unreduced = merge_phases(x);
-    x = reduce_phases(x, numbers);
-    if (to_text(merge_phases(x)) != to_text(unreduced))
-        steps_taken.push_back({"phases reduced in the phase group", "common practice, no source", unreduced,
-                               merge_phases(x), true});
+    x = merge_phases(reduce_phases(x, numbers));
+    if (!x.is_equal(unreduced))
+        steps_taken.push_back({"phases reduced in the phase group", "common practice, no source", unreduced, x, true});
     check_deadline();
     x = apply_jsum_rules(x, numbers);
     steps_taken.insert(steps_taken.end(), last_jsum_trace().begin(), last_jsum_trace().end());
@@ -93,7 +95,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
     // Counted on the input as canonicalized at the start (its phases do not change the counts);
     // the full canonical form, phases reduced, only when it is the answer.
     if (!never_worse(x, closed_form(merge_phases(arranged)))) {
-        const ex input = canonical_form(e, numbers);
+        const ex input = canonical_form_of_arranged(arranged, numbers);
         steps_taken.push_back({"the input's own form kept", "no reduction with fewer terms, sums and symbols",
                                x, input});
         x = input;

@@ -1,7 +1,7 @@
 // Each textbook result of the corpus, written as a user writes it, must come out of `couplet
 // simplify` in the form its source prints (textbook_form.hpp), verified by the command line's
 // own exact check; and the source's form itself must equal the input exactly at sampled points,
-// which checks the transcription of the source as well as the answer.
+// which checks the corpus entry itself as well as the answer.
 #include <catch2/catch.hpp>
 
 #include "corpus/textbook_corpus.hpp"

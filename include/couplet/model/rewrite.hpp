@@ -1,9 +1,15 @@
-// Two small tools the stages share for rewriting expressions that may hold sums.
+// Small tools the stages share for taking expressions apart and rewriting them.
 #pragma once
 
 #include <ginac/ginac.h>
 
+#include <vector>
+
 namespace couplet {
+
+// Terms of a sum (a single term is a sum of one); factors of a product (likewise).
+std::vector<GiNaC::ex> terms_of(const GiNaC::ex& e);
+std::vector<GiNaC::ex> factors_of(const GiNaC::ex& term);
 
 // A polynomial in names: numbers, names, sums and products of them, positive integer powers.
 // Such a factor is a weight like (2x+1) or a coefficient, never a coupling structure.
