@@ -1,8 +1,8 @@
 // Timings of the exact Wigner symbols, against GSL's double routines where GSL can answer.
 // Prints figures only; nothing here is an assertion.
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_sf_coupling.h>

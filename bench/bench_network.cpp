@@ -10,13 +10,13 @@
 #include <string>
 
 #include "cli/fixed_layout.hpp"
-#include "couplet/model/lower.hpp"
-#include "couplet/model/normalize.hpp"
-#include "couplet/model/result_shape.hpp"
-#include "couplet/network/cut.hpp"
-#include "couplet/network/reduce.hpp"
-#include "couplet/simplify.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "parse/lower.hpp"
+#include "model/normalize.hpp"
+#include "model/result_shape.hpp"
+#include "network/cut.hpp"
+#include "network/reduce.hpp"
+#include "simplify/simplify.hpp"
+#include "canonical/symmetries.hpp"
 #include "network/network_corpus.hpp"
 #include "network/random_network.hpp"
 

@@ -10,9 +10,9 @@
 #include "cli/fixed_layout.hpp"
 #include "corpus/textbook_corpus.hpp"
 #include "corpus/textbook_form.hpp"
-#include "couplet/model/lower.hpp"
-#include "couplet/print/print.hpp"
-#include "couplet/simplify.hpp"
+#include "parse/lower.hpp"
+#include "print/print.hpp"
+#include "simplify/simplify.hpp"
 
 using namespace couplet;
 

@@ -6,11 +6,11 @@
 #include <cstdio>
 #include <string>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/model/lower.hpp"
-#include "couplet/verify/domain.hpp"
-#include "couplet/verify/identity_check.hpp"
-#include "couplet/verify/sampler.hpp"
+#include "eval/evaluate.hpp"
+#include "parse/lower.hpp"
+#include "verify/domain.hpp"
+#include "verify/identity_check.hpp"
+#include "verify/sampler.hpp"
 
 namespace {
 

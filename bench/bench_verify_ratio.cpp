@@ -13,10 +13,10 @@
 #include <string>
 #include <vector>
 
-#include "couplet/model/lower.hpp"
+#include "parse/lower.hpp"
 #include "network/acceptance_inputs.hpp"
-#include "couplet/simplify.hpp"
-#include "couplet/verify/simplification_check.hpp"
+#include "simplify/simplify.hpp"
+#include "verify/simplification_check.hpp"
 
 namespace {
 

@@ -9,9 +9,9 @@
 #include <iostream>
 #include <string>
 
-#include "couplet/print/print.hpp"
-#include "couplet/model/result_shape.hpp"
-#include "couplet/simplify.hpp"
+#include "print/print.hpp"
+#include "model/result_shape.hpp"
+#include "simplify/simplify.hpp"
 #include "rules/jsum_check.hpp"
 #include "rules/random_jsum.hpp"
 

@@ -7,9 +7,9 @@
 #include <iostream>
 #include <string>
 
-#include "couplet/model/lower.hpp"
-#include "couplet/model/result_shape.hpp"
-#include "couplet/simplify.hpp"
+#include "parse/lower.hpp"
+#include "model/result_shape.hpp"
+#include "simplify/simplify.hpp"
 #include "network/network_points.hpp"
 #include "network/random_network.hpp"
 

@@ -8,7 +8,7 @@
 #include <vector>
 
 #include "cli/run.hpp"
-#include "couplet/model/lower.hpp"
+#include "parse/lower.hpp"
 
 namespace couplet::testing {
 

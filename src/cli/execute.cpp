@@ -3,17 +3,17 @@
 #include <algorithm>
 #include <chrono>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/exact/number.hpp"
-#include "couplet/print/print.hpp"
-#include "couplet/rules/engine.hpp"
-#include "couplet/simplify.hpp"
-#include "couplet/model/normalize.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "eval/evaluate.hpp"
+#include "exact/number.hpp"
+#include "print/print.hpp"
+#include "rules/engine.hpp"
+#include "simplify/simplify.hpp"
+#include "model/normalize.hpp"
+#include "canonical/symmetries.hpp"
 #include "simplify/closed_form.hpp"
-#include "simplify/phase_reduction.hpp"
-#include "couplet/verify/check_summary.hpp"
-#include "couplet/verify/simplification_check.hpp"
+#include "canonical/phase_reduction.hpp"
+#include "verify/check_summary.hpp"
+#include "verify/simplification_check.hpp"
 
 namespace couplet::cli {
 

@@ -7,11 +7,11 @@
 #include <string>
 #include <vector>
 
-#include "couplet/exact/number.hpp"
-#include "couplet/simplify.hpp"
+#include "exact/number.hpp"
+#include "simplify/simplify.hpp"
 
-#include "couplet/model/lower.hpp"
-#include "couplet/verify/identity_check.hpp"
+#include "parse/lower.hpp"
+#include "verify/identity_check.hpp"
 
 namespace couplet::cli {
 

@@ -2,10 +2,10 @@
 
 #include <sstream>
 
-#include "couplet/model/rewrite.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
-#include "couplet/print/step_change.hpp"
+#include "model/rewrite.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
+#include "print/step_change.hpp"
 
 namespace couplet::cli {
 

@@ -14,8 +14,8 @@
 #include <vector>
 
 #include "cli/execute.hpp"
-#include "couplet/print/latex_display.hpp"
-#include "couplet/source.hpp"
+#include "print/latex_display.hpp"
+#include "source/source.hpp"
 
 namespace couplet::cli {
 

@@ -1,6 +1,6 @@
 #include "cli/report.hpp"
 
-#include "couplet/print/print.hpp"
+#include "print/print.hpp"
 
 namespace couplet::cli {
 

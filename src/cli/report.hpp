@@ -7,7 +7,7 @@
 #include <string>
 
 #include "cli/latex_report.hpp"
-#include "couplet/source.hpp"
+#include "source/source.hpp"
 
 namespace couplet::cli {
 

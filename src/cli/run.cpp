@@ -12,11 +12,11 @@
 
 #include "cli/execute.hpp"
 #include "cli/report.hpp"
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/model/lower.hpp"
-#include "couplet/run_limits.hpp"
-#include "couplet/simplify.hpp"
-#include "couplet/verify/progress.hpp"
+#include "eval/evaluate.hpp"
+#include "parse/lower.hpp"
+#include "limits/run_limits.hpp"
+#include "simplify/simplify.hpp"
+#include "verify/progress.hpp"
 
 namespace couplet::cli {
 namespace {

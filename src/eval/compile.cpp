@@ -6,10 +6,10 @@
 
 #include "eval/plan.hpp"
 
-#include "couplet/model/lower.hpp"
-#include "couplet/model/structure.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
+#include "model/rewrite.hpp"
+#include "model/structure.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
 
 namespace couplet::eval_detail {
 

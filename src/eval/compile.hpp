@@ -1,6 +1,6 @@
 #pragma once
 
-#include "couplet/eval/evaluate.hpp"
+#include "eval/evaluate.hpp"
 #include "eval/compiled.hpp"
 
 namespace couplet::eval_detail {

@@ -16,7 +16,7 @@
 #include <string>
 #include <vector>
 
-#include "couplet/exact/number.hpp"
+#include "exact/number.hpp"
 
 namespace couplet::eval_detail {
 

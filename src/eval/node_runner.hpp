@@ -5,9 +5,9 @@
 
 #include <optional>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "eval/evaluate.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 #include "eval/compiled.hpp"
 
 namespace couplet::eval_detail {

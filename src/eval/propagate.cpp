@@ -12,7 +12,7 @@
 #include <sstream>
 #include <stdexcept>
 
-#include "couplet/run_limits.hpp"
+#include "limits/run_limits.hpp"
 #include "eval/node_runner.hpp"
 
 namespace couplet::eval_detail {

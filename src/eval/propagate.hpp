@@ -8,7 +8,7 @@
 #include <utility>
 #include <vector>
 
-#include "couplet/eval/evaluate.hpp"
+#include "eval/evaluate.hpp"
 #include "eval/compiled.hpp"
 
 namespace couplet::eval_detail {

@@ -10,7 +10,7 @@
 #include <optional>
 #include <sstream>
 
-#include "couplet/run_limits.hpp"
+#include "limits/run_limits.hpp"
 #include "eval/compile.hpp"
 #include "eval/node_runner.hpp"
 #include "eval/propagate.hpp"

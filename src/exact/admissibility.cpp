@@ -1,4 +1,4 @@
-#include "couplet/exact/admissibility.hpp"
+#include "exact/admissibility.hpp"
 
 namespace couplet::exact {
 

@@ -1,6 +1,6 @@
-#include "couplet/exact/argument_limits.hpp"
+#include "exact/argument_limits.hpp"
 
-#include "couplet/exact/wigner.hpp"
+#include "exact/wigner.hpp"
 
 #include <stdexcept>
 #include <string>

@@ -1,4 +1,4 @@
-#include "couplet/exact/coprime_ratio.hpp"
+#include "exact/coprime_ratio.hpp"
 
 // CLN builds its own reduced fractions with I_I_to_RA(a, b) ("b > 0 and gcd(a, b) = 1"),
 // exported by libcln but declared only in its private headers.  It is referenced weakly:

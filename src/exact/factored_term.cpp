@@ -1,6 +1,6 @@
-#include "couplet/exact/factored_term.hpp"
+#include "exact/factored_term.hpp"
 
-#include "couplet/exact/coprime_ratio.hpp"
+#include "exact/coprime_ratio.hpp"
 
 #include <algorithm>
 #include <limits>

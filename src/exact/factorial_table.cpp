@@ -1,4 +1,4 @@
-#include "couplet/exact/factorial_table.hpp"
+#include "exact/factorial_table.hpp"
 
 #include <algorithm>
 #include <stdexcept>

@@ -1,4 +1,4 @@
-#include "couplet/exact/float_enclosure.hpp"
+#include "exact/float_enclosure.hpp"
 
 #include <cln/lfloat.h>
 #include <cln/real.h>

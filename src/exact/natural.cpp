@@ -1,4 +1,4 @@
-#include "couplet/exact/natural.hpp"
+#include "exact/natural.hpp"
 
 #include <algorithm>
 #include <stdexcept>

@@ -9,11 +9,11 @@
 // with P_x the product of the three Racah-series numerators, f_x its prime exponents and
 // m_p = min_x f_x,p, so that no term needs a denominator.
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/argument_limits.hpp"
-#include "couplet/exact/factored_term.hpp"
-#include "couplet/exact/racah_series.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/argument_limits.hpp"
+#include "exact/factored_term.hpp"
+#include "exact/racah_series.hpp"
+#include "exact/wigner.hpp"
 
 #include <algorithm>
 #include <array>

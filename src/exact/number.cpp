@@ -1,4 +1,4 @@
-#include "couplet/exact/number.hpp"
+#include "exact/number.hpp"
 
 #include <ostream>
 #include <stdexcept>

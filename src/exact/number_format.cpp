@@ -1,7 +1,7 @@
 // Printing: the couplet input syntax, doubles, and decimals.
 
-#include "couplet/exact/number.hpp"
-#include "couplet/exact/float_enclosure.hpp"
+#include "exact/number.hpp"
+#include "exact/float_enclosure.hpp"
 
 #include <cln/float.h>
 #include <cln/integer_io.h>

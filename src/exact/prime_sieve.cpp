@@ -1,4 +1,4 @@
-#include "couplet/exact/prime_sieve.hpp"
+#include "exact/prime_sieve.hpp"
 
 #include <algorithm>
 #include <stdexcept>

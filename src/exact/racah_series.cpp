@@ -1,4 +1,4 @@
-#include "couplet/exact/racah_series.hpp"
+#include "exact/racah_series.hpp"
 
 #include <algorithm>
 

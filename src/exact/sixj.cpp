@@ -3,11 +3,11 @@
 //       * sum_s (-1)^s (s+1)! / ((s-a-b-c)!(s-a-e-f)!(s-d-b-f)!(s-d-e-c)!
 //                                (a+b+d+e-s)!(b+c+e+f-s)!(c+a+f+d-s)!)
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/argument_limits.hpp"
-#include "couplet/exact/factored_term.hpp"
-#include "couplet/exact/racah_series.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/argument_limits.hpp"
+#include "exact/factored_term.hpp"
+#include "exact/racah_series.hpp"
+#include "exact/wigner.hpp"
 
 #include <algorithm>
 #include <vector>

@@ -2,8 +2,8 @@
 // division up to the cube root of what is left (then the rest has at most two prime
 // factors, so it is square-free unless it is a perfect square).
 
-#include "couplet/exact/number.hpp"
-#include "couplet/exact/prime_sieve.hpp"
+#include "exact/number.hpp"
+#include "exact/prime_sieve.hpp"
 
 #include <stdexcept>
 

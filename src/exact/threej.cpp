@@ -3,11 +3,11 @@
 //       * sqrt((j1+m1)!(j1-m1)!(j2+m2)!(j2-m2)!(j3+m3)!(j3-m3)!)
 //       * sum_s (-1)^s / (s!(j1+j2-j3-s)!(j1-m1-s)!(j2+m2-s)!(j3-j2+m1+s)!(j3-j1-m2+s)!)
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/argument_limits.hpp"
-#include "couplet/exact/factored_term.hpp"
-#include "couplet/exact/racah_series.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/argument_limits.hpp"
+#include "exact/factored_term.hpp"
+#include "exact/racah_series.hpp"
+#include "exact/wigner.hpp"
 
 #include <algorithm>
 #include <climits>

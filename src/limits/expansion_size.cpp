@@ -1,8 +1,8 @@
 #include <algorithm>
 #include <limits>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/run_limits.hpp"
+#include "model/symbols.hpp"
+#include "limits/run_limits.hpp"
 
 namespace couplet {
 

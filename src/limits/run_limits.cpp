@@ -1,4 +1,4 @@
-#include "couplet/run_limits.hpp"
+#include "limits/run_limits.hpp"
 
 namespace couplet {
 

@@ -1,4 +1,4 @@
-#include "couplet/model/fresh_index.hpp"
+#include "model/fresh_index.hpp"
 
 #include <map>
 #include <set>

@@ -1,6 +1,6 @@
-#include "couplet/model/normalize.hpp"
+#include "model/normalize.hpp"
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 

@@ -1,12 +1,12 @@
-#include "couplet/model/quantum.hpp"
+#include "model/quantum.hpp"
 
 #include <algorithm>
 #include <map>
 #include <stdexcept>
 
-#include "couplet/model/same_value.hpp"
-#include "couplet/model/structure.hpp"
-#include "couplet/source.hpp"
+#include "model/same_value.hpp"
+#include "model/structure.hpp"
+#include "source/source.hpp"
 
 namespace couplet {
 

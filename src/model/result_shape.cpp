@@ -1,6 +1,6 @@
-#include "couplet/model/result_shape.hpp"
+#include "model/result_shape.hpp"
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 

@@ -1,8 +1,8 @@
-#include "couplet/model/rewrite.hpp"
+#include "model/rewrite.hpp"
 
 #include <algorithm>
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 
@@ -41,6 +41,27 @@ ex replaced(const ex& e, const ex& target, const ex& by) {
         return pow(ops[0], ops[1]);
     }
     return e;
+}
+
+bool is_linear_form(const ex& e) {
+    ex x = e.expand();
+    auto linear_term = [](const ex& t) {
+        if (is_a<numeric>(t)) return ex_to<numeric>(t).is_rational();
+        if (is_a<symbol>(t)) return true;
+        if (is_a<mul>(t) && t.nops() == 2) {
+            const ex& a = t.op(0);
+            const ex& b = t.op(1);
+            return (is_a<symbol>(a) && is_a<numeric>(b) && ex_to<numeric>(b).is_rational()) ||
+                   (is_a<symbol>(b) && is_a<numeric>(a) && ex_to<numeric>(a).is_rational());
+        }
+        return false;
+    };
+    if (is_a<add>(x)) {
+        for (const ex& t : x)
+            if (!linear_term(t)) return false;
+        return true;
+    }
+    return linear_term(x);
 }
 
 }  // namespace couplet

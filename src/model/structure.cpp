@@ -1,10 +1,10 @@
-#include "couplet/model/structure.hpp"
+#include "model/structure.hpp"
 
 #include <algorithm>
 #include <optional>
 #include <string>
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 

@@ -1,8 +1,8 @@
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
-#include "couplet/model/structure.hpp"
+#include "model/structure.hpp"
 
-#include "couplet/print/print.hpp"
+#include "model/readable_order.hpp"
 
 #include <algorithm>
 #include <cln/rational.h>
@@ -71,9 +71,7 @@ ex kdelta_eval(const ex& x, const ex& y) {
     if (is_num(diff)) return 0;
     // delta is symmetric: one argument order, chosen by the printed forms (never by GiNaC's
     // hash order), so equal deltas print and collect alike.
-    std::string tx = to_text(x), ty = to_text(y);
-    if (tx != ty && !(is_a<symbol>(x) && is_a<symbol>(y) ? readable_name_less(tx, ty) : tx < ty))
-        return kdelta(y, x).hold();
+    if (readable_less(y, x)) return kdelta(y, x).hold();
     return kdelta(x, y).hold();
 }
 

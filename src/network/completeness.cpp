@@ -1,12 +1,12 @@
-#include "couplet/network/completeness.hpp"
+#include "network/completeness.hpp"
 
 #include <algorithm>
 #include <optional>
 
-#include "couplet/model/normalize.hpp"
-#include "couplet/model/same_value.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "model/normalize.hpp"
+#include "model/same_value.hpp"
+#include "model/symbols.hpp"
+#include "canonical/symmetries.hpp"
 
 namespace couplet::network {
 

@@ -1,11 +1,11 @@
-#include "couplet/network/cut.hpp"
+#include "network/cut.hpp"
 
 #include <algorithm>
 #include <array>
 #include <numeric>
 
-#include "couplet/model/same_value.hpp"
-#include "couplet/model/symbols.hpp"
+#include "model/same_value.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::network {
 

@@ -1,6 +1,6 @@
-#include "couplet/network/fixed_projection.hpp"
+#include "network/fixed_projection.hpp"
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::network {
 

@@ -1,11 +1,11 @@
-#include "couplet/network/match.hpp"
+#include "network/match.hpp"
 
 #include <algorithm>
 #include <cstdint>
 
-#include "couplet/model/same_value.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "model/same_value.hpp"
+#include "model/symbols.hpp"
+#include "canonical/symmetries.hpp"
 
 namespace couplet::network {
 

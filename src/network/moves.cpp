@@ -1,6 +1,6 @@
-#include "couplet/network/move.hpp"
+#include "network/move.hpp"
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::network {
 

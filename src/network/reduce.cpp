@@ -1,16 +1,16 @@
-#include "couplet/network/reduce.hpp"
+#include "network/reduce.hpp"
 
 #include <deque>
 
-#include "couplet/model/fresh_index.hpp"
-#include "couplet/model/normalize.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/network/cut.hpp"
-#include "couplet/network/fixed_projection.hpp"
-#include "couplet/network/match.hpp"
-#include "couplet/network/term.hpp"
-#include "couplet/symmetry/symmetries.hpp"
-#include "simplify/phase_reduction.hpp"
+#include "model/fresh_index.hpp"
+#include "model/normalize.hpp"
+#include "model/symbols.hpp"
+#include "network/cut.hpp"
+#include "network/fixed_projection.hpp"
+#include "network/match.hpp"
+#include "network/term.hpp"
+#include "canonical/symmetries.hpp"
+#include "canonical/phase_reduction.hpp"
 
 namespace couplet::network {
 

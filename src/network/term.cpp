@@ -1,8 +1,8 @@
-#include "couplet/network/term.hpp"
+#include "network/term.hpp"
 
 #include <array>
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::network {
 

@@ -3,7 +3,7 @@
 
 #include <boost/fusion/include/adapt_struct.hpp>
 
-#include "couplet/ast.hpp"
+#include "parse/ast.hpp"
 
 BOOST_FUSION_ADAPT_STRUCT(couplet::ast::number, digits)
 BOOST_FUSION_ADAPT_STRUCT(couplet::ast::identifier, name)

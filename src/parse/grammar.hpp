@@ -6,7 +6,7 @@
 #include <string>
 #include <type_traits>
 
-#include "couplet/ast.hpp"
+#include "parse/ast.hpp"
 
 namespace couplet::parser {
 

@@ -1,7 +1,7 @@
 #include <boost/spirit/home/x3.hpp>
 #include <string>
 
-#include "couplet/parse.hpp"
+#include "parse/parse.hpp"
 #include "parse/grammar.hpp"
 
 namespace couplet {

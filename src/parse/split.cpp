@@ -3,7 +3,7 @@
 #include <string>
 #include <vector>
 
-#include "couplet/parse.hpp"
+#include "parse/parse.hpp"
 
 namespace couplet {
 namespace {

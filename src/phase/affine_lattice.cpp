@@ -1,4 +1,4 @@
-#include "couplet/phase/affine_lattice.hpp"
+#include "phase/affine_lattice.hpp"
 
 #include <stdexcept>
 #include <utility>

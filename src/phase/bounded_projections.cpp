@@ -1,4 +1,4 @@
-#include "couplet/phase/bounded_projections.hpp"
+#include "phase/bounded_projections.hpp"
 
 #include <cln/rational.h>
 

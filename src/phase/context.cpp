@@ -1,7 +1,7 @@
 // Declarations and constraints of a phase context; the queries are in context_queries.cpp.
-#include "couplet/phase/context.hpp"
+#include "phase/context.hpp"
 
-#include "couplet/phase/phase_lattice.hpp"
+#include "phase/phase_lattice.hpp"
 
 namespace couplet::phase {
 

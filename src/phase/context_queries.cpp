@@ -1,11 +1,11 @@
 // The queries of a phase context: integrality, equality and canonical forms.
-#include "couplet/phase/context.hpp"
+#include "phase/context.hpp"
 
-#include "couplet/phase/bounded_projections.hpp"
-#include "couplet/phase/phase_lattice.hpp"
-#include "couplet/phase/phase_level.hpp"
-#include "couplet/phase/representative_search.hpp"
-#include "couplet/phase/witness_search.hpp"
+#include "phase/bounded_projections.hpp"
+#include "phase/phase_lattice.hpp"
+#include "phase/phase_level.hpp"
+#include "phase/representative_search.hpp"
+#include "phase/witness_search.hpp"
 
 #include <algorithm>
 #include <numeric>

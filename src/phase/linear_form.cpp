@@ -1,4 +1,4 @@
-#include "couplet/phase/linear_form.hpp"
+#include "phase/linear_form.hpp"
 
 #include <cln/rational_io.h>
 

@@ -1,4 +1,4 @@
-#include "couplet/phase/modular_echelon.hpp"
+#include "phase/modular_echelon.hpp"
 
 #include <numeric>
 #include <stdexcept>

@@ -1,6 +1,6 @@
-#include "couplet/phase/null_move_descent.hpp"
+#include "phase/null_move_descent.hpp"
 
-#include "couplet/phase/readability.hpp"
+#include "phase/readability.hpp"
 
 #include <array>
 #include <cstdint>

@@ -1,6 +1,6 @@
-#include "couplet/phase/phase_lattice.hpp"
+#include "phase/phase_lattice.hpp"
 
-#include "couplet/phase/phase_level.hpp"
+#include "phase/phase_level.hpp"
 
 #include <cstdint>
 

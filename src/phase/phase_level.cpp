@@ -1,7 +1,7 @@
-#include "couplet/phase/phase_level.hpp"
+#include "phase/phase_level.hpp"
 
-#include "couplet/phase/phase_lattice.hpp"
-#include "couplet/phase/representative_search.hpp"
+#include "phase/phase_lattice.hpp"
+#include "phase/representative_search.hpp"
 
 #include <numeric>
 #include <set>

@@ -1,6 +1,6 @@
-#include "couplet/phase/readability.hpp"
+#include "phase/readability.hpp"
 
-#include "couplet/phase/scaled_form.hpp"
+#include "phase/scaled_form.hpp"
 
 namespace couplet::phase::detail {
 

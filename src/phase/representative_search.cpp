@@ -1,7 +1,7 @@
-#include "couplet/phase/representative_search.hpp"
+#include "phase/representative_search.hpp"
 
-#include "couplet/phase/null_move_descent.hpp"
-#include "couplet/phase/readability.hpp"
+#include "phase/null_move_descent.hpp"
+#include "phase/readability.hpp"
 
 #include <array>
 #include <cstdint>

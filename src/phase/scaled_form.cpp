@@ -1,7 +1,7 @@
-#include "couplet/phase/scaled_form.hpp"
+#include "phase/scaled_form.hpp"
 
-#include "couplet/phase/affine_lattice.hpp"
-#include "couplet/phase/context.hpp"
+#include "phase/affine_lattice.hpp"
+#include "phase/context.hpp"
 
 #include <cln/integer.h>
 

@@ -1,4 +1,4 @@
-#include "couplet/phase/witness_search.hpp"
+#include "phase/witness_search.hpp"
 
 #include <algorithm>
 #include <cmath>

@@ -4,9 +4,9 @@
 #include <set>
 #include <sstream>
 
-#include "couplet/exact/number.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
+#include "exact/number.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
 #include "print/latex_width.hpp"
 #include "print/writer.hpp"
 

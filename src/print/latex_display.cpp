@@ -1,4 +1,4 @@
-#include "couplet/print/latex_display.hpp"
+#include "print/latex_display.hpp"
 
 #include "print/latex_width.hpp"
 

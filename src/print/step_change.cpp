@@ -1,10 +1,10 @@
-#include "couplet/print/step_change.hpp"
+#include "print/step_change.hpp"
 
 #include <algorithm>
 #include <vector>
 
-#include "couplet/model/rewrite.hpp"
-#include "couplet/model/symbols.hpp"
+#include "model/rewrite.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 

@@ -1,8 +1,8 @@
 // Text notation: the couplet input language itself, so that output can be read back.
 #include <sstream>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
 #include "print/writer.hpp"
 
 namespace couplet {

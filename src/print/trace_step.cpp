@@ -1,4 +1,4 @@
-#include "couplet/print/print.hpp"
+#include "print/print.hpp"
 
 namespace couplet {
 

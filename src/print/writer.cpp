@@ -4,8 +4,9 @@
 #include <sstream>
 #include <tuple>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
+#include "model/readable_order.hpp"
 
 namespace couplet::print_detail {
 

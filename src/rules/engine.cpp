@@ -1,4 +1,4 @@
-#include "couplet/rules/engine.hpp"
+#include "rules/engine.hpp"
 
 #include <cln/rational.h>
 
@@ -6,18 +6,19 @@
 #include <map>
 #include <set>
 
-#include "couplet/model/fresh_index.hpp"
-#include "couplet/model/normalize.hpp"
-#include "couplet/model/rewrite.hpp"
-#include "couplet/model/result_shape.hpp"
-#include "couplet/run_limits.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "model/fresh_index.hpp"
+#include "model/normalize.hpp"
+#include "model/rewrite.hpp"
+#include "model/result_shape.hpp"
+#include "limits/run_limits.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
+#include "canonical/symmetries.hpp"
 #include "rules/matcher.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
-#include "simplify/phase_reduction.hpp"
+#include "canonical/phase_reduction.hpp"
+#include "model/readable_order.hpp"
 
 namespace couplet::rules {
 

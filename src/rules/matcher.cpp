@@ -1,7 +1,7 @@
 #include "rules/matcher.hpp"
 
-#include "couplet/model/same_value.hpp"
-#include "couplet/model/symbols.hpp"
+#include "model/same_value.hpp"
+#include "model/symbols.hpp"
 #include "rules/structure.hpp"
 
 namespace couplet::rules {

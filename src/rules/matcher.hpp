@@ -7,8 +7,8 @@
 #include <optional>
 #include <vector>
 
-#include "couplet/model/quantum.hpp"
-#include "couplet/rules/rule.hpp"
+#include "model/quantum.hpp"
+#include "rules/rule.hpp"
 
 namespace couplet::rules {
 

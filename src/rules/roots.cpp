@@ -4,7 +4,7 @@
 #include <set>
 #include <string>
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::rules {
 

@@ -3,8 +3,8 @@
 #include <random>
 #include <stdexcept>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/rules/rule.hpp"
+#include "eval/evaluate.hpp"
+#include "rules/rule.hpp"
 #include "rules/structure.hpp"
 
 namespace couplet::rules {

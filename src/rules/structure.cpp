@@ -1,12 +1,12 @@
 #include "rules/structure.hpp"
 
-#include "simplify/phase_reduction.hpp"
+#include "canonical/phase_reduction.hpp"
 
 #include <algorithm>
 #include <set>
 #include <stdexcept>
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::rules {
 

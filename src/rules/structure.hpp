@@ -8,10 +8,10 @@
 #include <optional>
 #include <vector>
 
-#include "couplet/model/quantum.hpp"
-#include "couplet/model/rewrite.hpp"
-#include "couplet/phase/context.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "model/quantum.hpp"
+#include "model/rewrite.hpp"
+#include "phase/context.hpp"
+#include "canonical/symmetries.hpp"
 
 namespace couplet::rules {
 

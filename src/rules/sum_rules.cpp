@@ -1,7 +1,7 @@
 // The table of sum rules.  Each is written once in its own pattern symbols; self_test checks
 // it exactly, so a misremembered phase or triangle cannot survive the test suite.
-#include "couplet/model/symbols.hpp"
-#include "couplet/rules/rule.hpp"
+#include "model/symbols.hpp"
+#include "rules/rule.hpp"
 
 namespace couplet::rules {
 

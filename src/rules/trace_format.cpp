@@ -1,6 +1,6 @@
 // The j-sum trace as plain text, for the command line's derivation output.
-#include "couplet/print/print.hpp"
-#include "couplet/rules/engine.hpp"
+#include "print/print.hpp"
+#include "rules/engine.hpp"
 
 namespace couplet {
 

@@ -4,10 +4,10 @@
 #include <array>
 #include <vector>
 
-#include "couplet/model/rewrite.hpp"
-#include "couplet/model/structure.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "model/rewrite.hpp"
+#include "model/structure.hpp"
+#include "model/symbols.hpp"
+#include "canonical/symmetries.hpp"
 
 namespace couplet {
 

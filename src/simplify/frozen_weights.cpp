@@ -3,8 +3,8 @@
 #include <set>
 #include <string>
 
-#include "couplet/model/rewrite.hpp"
-#include "couplet/model/symbols.hpp"
+#include "model/rewrite.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 

@@ -7,7 +7,7 @@
 
 #include <ginac/ginac.h>
 
-#include "couplet/model/quantum.hpp"
+#include "model/quantum.hpp"
 
 namespace couplet {
 

@@ -1,6 +1,6 @@
 #include "simplify/nest_sums.hpp"
 
-#include "couplet/model/symbols.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 

@@ -1,19 +1,19 @@
-#include "couplet/simplify.hpp"
+#include "simplify/simplify.hpp"
 
 #include <tuple>
 
-#include "couplet/model/normalize.hpp"
-#include "couplet/model/result_shape.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/network/completeness.hpp"
-#include "couplet/network/reduce.hpp"
-#include "couplet/run_limits.hpp"
-#include "couplet/rules/engine.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "model/normalize.hpp"
+#include "model/result_shape.hpp"
+#include "model/symbols.hpp"
+#include "network/completeness.hpp"
+#include "network/reduce.hpp"
+#include "limits/run_limits.hpp"
+#include "rules/engine.hpp"
+#include "canonical/symmetries.hpp"
 #include "simplify/closed_form.hpp"
 #include "simplify/frozen_weights.hpp"
 #include "simplify/nest_sums.hpp"
-#include "simplify/phase_reduction.hpp"
+#include "canonical/phase_reduction.hpp"
 
 namespace couplet {
 

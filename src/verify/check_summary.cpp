@@ -1,9 +1,9 @@
-#include "couplet/verify/check_summary.hpp"
+#include "verify/check_summary.hpp"
 
 #include <sstream>
 
-#include "couplet/print/print.hpp"
-#include "couplet/verify/phase_fit.hpp"
+#include "print/print.hpp"
+#include "verify/phase_fit.hpp"
 
 namespace couplet::verify {
 

@@ -1,4 +1,4 @@
-#include "couplet/verify/domain.hpp"
+#include "verify/domain.hpp"
 
 #include <cln/integer.h>
 #include <cln/rational.h>
@@ -9,9 +9,9 @@
 #include <set>
 #include <tuple>
 
-#include "couplet/model/lower.hpp"
-#include "couplet/model/structure.hpp"
-#include "couplet/model/symbols.hpp"
+#include "model/rewrite.hpp"
+#include "model/structure.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::verify {
 

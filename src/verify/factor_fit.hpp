@@ -8,10 +8,10 @@
 #include <optional>
 #include <vector>
 
-#include "couplet/exact/number.hpp"
-#include "couplet/verify/domain.hpp"
-#include "couplet/verify/phase_fit.hpp"
-#include "couplet/verify/sampler.hpp"
+#include "exact/number.hpp"
+#include "verify/domain.hpp"
+#include "verify/phase_fit.hpp"
+#include "verify/sampler.hpp"
 
 namespace couplet::verify::detail {
 

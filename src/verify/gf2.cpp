@@ -1,4 +1,4 @@
-#include "couplet/verify/gf2.hpp"
+#include "verify/gf2.hpp"
 
 namespace couplet::verify::gf2 {
 

@@ -1,17 +1,17 @@
-#include "couplet/verify/identity_check.hpp"
+#include "verify/identity_check.hpp"
 
-#include "couplet/run_limits.hpp"
+#include "limits/run_limits.hpp"
 
 #include <algorithm>
 #include <sstream>
 #include <stdexcept>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/simplify.hpp"
-#include "couplet/verify/domain.hpp"
-#include "couplet/verify/phase_fit.hpp"
-#include "couplet/verify/tolerant_evaluation.hpp"
+#include "eval/evaluate.hpp"
+#include "model/symbols.hpp"
+#include "simplify/simplify.hpp"
+#include "verify/domain.hpp"
+#include "verify/phase_fit.hpp"
+#include "verify/tolerant_evaluation.hpp"
 #include "verify/factor_fit.hpp"
 
 namespace couplet::verify {

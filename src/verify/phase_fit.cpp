@@ -1,11 +1,11 @@
-#include "couplet/verify/phase_fit.hpp"
+#include "verify/phase_fit.hpp"
 
 #include <map>
 #include <set>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
-#include "couplet/verify/gf2.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
+#include "verify/gf2.hpp"
 #include "verify/readable_phase.hpp"
 
 namespace couplet::verify {

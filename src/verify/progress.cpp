@@ -1,4 +1,4 @@
-#include "couplet/verify/progress.hpp"
+#include "verify/progress.hpp"
 
 #include <ostream>
 

@@ -6,7 +6,7 @@
 
 #include <vector>
 
-#include "couplet/verify/phase_fit.hpp"
+#include "verify/phase_fit.hpp"
 
 namespace couplet::verify::detail {
 

@@ -1,6 +1,6 @@
-#include "couplet/verify/sampler.hpp"
+#include "verify/sampler.hpp"
 
-#include "couplet/run_limits.hpp"
+#include "limits/run_limits.hpp"
 
 #include <algorithm>
 #include <random>

@@ -1,14 +1,14 @@
-#include "couplet/verify/simplification_check.hpp"
+#include "verify/simplification_check.hpp"
 
 #include <algorithm>
 #include <memory>
 #include <random>
 #include <stdexcept>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/run_limits.hpp"
-#include "couplet/verify/domain.hpp"
-#include "couplet/verify/tolerant_evaluation.hpp"
+#include "eval/evaluate.hpp"
+#include "limits/run_limits.hpp"
+#include "verify/domain.hpp"
+#include "verify/tolerant_evaluation.hpp"
 
 namespace couplet::verify {
 

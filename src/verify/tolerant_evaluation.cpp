@@ -1,4 +1,4 @@
-#include "couplet/verify/tolerant_evaluation.hpp"
+#include "verify/tolerant_evaluation.hpp"
 
 #include <exception>
 #include <stdexcept>

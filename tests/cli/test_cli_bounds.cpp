@@ -7,7 +7,7 @@
 #include <limits>
 #include <random>
 
-#include "couplet/run_limits.hpp"
+#include "limits/run_limits.hpp"
 #include "support.hpp"
 
 using namespace couplet;

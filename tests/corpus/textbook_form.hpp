@@ -9,10 +9,10 @@
 #include <string>
 #include <vector>
 
-#include "couplet/model/structure.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
-#include "couplet/simplify.hpp"
+#include "model/structure.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
+#include "simplify/simplify.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
 

@@ -5,7 +5,7 @@
 #include <functional>
 
 #include "admissible.hpp"
-#include "couplet/eval/evaluate.hpp"
+#include "eval/evaluate.hpp"
 #include "support.hpp"
 
 using namespace couplet;

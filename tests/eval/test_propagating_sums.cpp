@@ -7,7 +7,7 @@
 
 #include <random>
 
-#include "couplet/eval/evaluate.hpp"
+#include "eval/evaluate.hpp"
 #include "network/network_points.hpp"
 #include "network/random_network.hpp"
 #include "support.hpp"

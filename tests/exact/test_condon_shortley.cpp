@@ -1,8 +1,8 @@
 // Condon-Shortley conventions of the Clebsch-Gordan coefficients (common practice, no
 // source), checked exactly for every admissible j up to 10.
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

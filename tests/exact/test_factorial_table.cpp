@@ -1,6 +1,6 @@
 // Prime sieve and factorial exponent vectors, checked against CLN's factorials.
 
-#include "couplet/exact/factorial_table.hpp"
+#include "exact/factorial_table.hpp"
 
 #include <catch2/catch.hpp>
 

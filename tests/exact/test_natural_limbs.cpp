@@ -1,6 +1,6 @@
 // The word-limb naturals under the Racah sums, checked against cln::cl_I.
 
-#include "couplet/exact/natural.hpp"
+#include "exact/natural.hpp"
 
 #include <catch2/catch.hpp>
 

@@ -1,7 +1,7 @@
 // Arithmetic of couplet::exact::number: canonical form, field operations, square roots.
 
-#include "couplet/exact/coprime_ratio.hpp"
-#include "couplet/exact/number.hpp"
+#include "exact/coprime_ratio.hpp"
+#include "exact/number.hpp"
 
 #include <catch2/catch.hpp>
 

@@ -1,6 +1,6 @@
 // Printing of couplet::exact::number: input syntax, decimals, doubles.
 
-#include "couplet/exact/number.hpp"
+#include "exact/number.hpp"
 
 #include <catch2/catch.hpp>
 

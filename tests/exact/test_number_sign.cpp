@@ -1,6 +1,6 @@
 // Exact sign of sums of square roots, including differences far below any fixed precision.
 
-#include "couplet/exact/number.hpp"
+#include "exact/number.hpp"
 
 #include <catch2/catch.hpp>
 

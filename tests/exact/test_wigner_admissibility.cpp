@@ -1,7 +1,7 @@
 // Selection rules: every non-admissible argument set gives exact 0; too large ones throw.
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

@@ -1,8 +1,8 @@
 // Exact 3j, 6j and 9j symbols against GSL 2.7's double routines (gsl_sf_coupling_3j_e,
 // gsl_sf_coupling_6j_e, gsl_sf_coupling_9j_e) on random admissible symbols with j <= 20.
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

@@ -1,8 +1,8 @@
 // 9j symbols: the zero-argument reduction DLMF 34.7.1, and the definition by 3j symbols
 // DLMF 34.6.1 (independent of the 6j route the implementation takes).
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

@@ -2,8 +2,8 @@
 // from the formula and compared exactly with the Racah sum, at every admissible j up to 12
 // and at a few very large j.
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

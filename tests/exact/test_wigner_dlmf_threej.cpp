@@ -1,7 +1,7 @@
 // 3j closed forms of DLMF 34.3.1-34.3.7, each written out here from the formula and
 // evaluated with CLN factorials, compared exactly with the Racah sum.
 
-#include "couplet/exact/wigner.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

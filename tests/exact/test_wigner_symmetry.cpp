@@ -2,8 +2,8 @@
 // m -> -m (DLMF 34.3.8-34.3.10), the 24 tetrahedral symmetries of the 6j (DLMF 34.5.8), the
 // 9j under transposition and permutations of rows and columns (DLMF 34.7(ii)).
 
-#include "couplet/exact/admissibility.hpp"
-#include "couplet/exact/wigner.hpp"
+#include "exact/admissibility.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

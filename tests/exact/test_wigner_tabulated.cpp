@@ -1,6 +1,6 @@
 // A few tabulated values, exactly; each also against GSL 2.7 in double precision.
 
-#include "couplet/exact/wigner.hpp"
+#include "exact/wigner.hpp"
 
 #include <catch2/catch.hpp>
 

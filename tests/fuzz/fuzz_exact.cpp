@@ -5,7 +5,7 @@
 #include <cstdint>
 #include <cstdlib>
 
-#include "couplet/exact/wigner.hpp"
+#include "exact/wigner.hpp"
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
     if (size < 9) return 0;

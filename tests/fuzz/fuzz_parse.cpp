@@ -4,7 +4,7 @@
 #include <cstdint>
 #include <string>
 
-#include "couplet/model/lower.hpp"
+#include "parse/lower.hpp"
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
     couplet::source_file src("<fuzz>", std::string(reinterpret_cast<const char*>(data), size));

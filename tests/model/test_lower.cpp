@@ -1,8 +1,8 @@
 // Lowering: roles inferred from slots, declarations, definitions and sums.
 #include <catch2/catch.hpp>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
 #include "support.hpp"
 
 using namespace couplet;

@@ -2,10 +2,10 @@
 // reduction of one statement must not borrow the pairing another statement made.
 #include <catch2/catch.hpp>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/model/fresh_index.hpp"
-#include "couplet/model/symbols.hpp"
-#include "simplify/phase_reduction.hpp"
+#include "eval/evaluate.hpp"
+#include "model/fresh_index.hpp"
+#include "model/symbols.hpp"
+#include "canonical/phase_reduction.hpp"
 #include "support.hpp"
 
 using namespace couplet;

@@ -15,10 +15,10 @@
 #include <set>
 #include <vector>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/model/quantum.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "eval/evaluate.hpp"
+#include "model/quantum.hpp"
+#include "model/symbols.hpp"
+#include "canonical/symmetries.hpp"
 
 namespace couplet::testing {
 

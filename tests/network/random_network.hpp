@@ -10,8 +10,8 @@
 #include <string>
 #include <vector>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/model/quantum.hpp"
+#include "model/symbols.hpp"
+#include "model/quantum.hpp"
 
 namespace couplet::testing {
 

@@ -6,7 +6,7 @@
 #include <nlohmann/json.hpp>
 
 #include "acceptance_inputs.hpp"
-#include "couplet/model/result_shape.hpp"
+#include "model/result_shape.hpp"
 #include "network_corpus.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"

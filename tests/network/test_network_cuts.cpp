@@ -5,12 +5,12 @@
 
 #include <iostream>
 
-#include "couplet/model/fresh_index.hpp"
-#include "couplet/model/normalize.hpp"
-#include "couplet/network/cut.hpp"
-#include "couplet/network/reduce.hpp"
-#include "couplet/symmetry/symmetries.hpp"
-#include "simplify/phase_reduction.hpp"
+#include "model/fresh_index.hpp"
+#include "model/normalize.hpp"
+#include "network/cut.hpp"
+#include "network/reduce.hpp"
+#include "canonical/symmetries.hpp"
+#include "canonical/phase_reduction.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"
 #include "support.hpp"

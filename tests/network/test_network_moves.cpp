@@ -4,7 +4,7 @@
 
 #include <iostream>
 
-#include "couplet/network/move.hpp"
+#include "network/move.hpp"
 #include "network_points.hpp"
 
 using namespace couplet;

@@ -4,7 +4,7 @@
 
 #include <iostream>
 
-#include "couplet/simplify.hpp"
+#include "simplify/simplify.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"
 #include "support.hpp"

@@ -2,8 +2,8 @@
 // projections are open ends, and why a term is not a network.
 #include <catch2/catch.hpp>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/network/term.hpp"
+#include "model/symbols.hpp"
+#include "network/term.hpp"
 #include "support.hpp"
 
 using namespace couplet;

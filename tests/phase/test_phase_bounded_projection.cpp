@@ -3,7 +3,7 @@
 // allow.  Hand-checked schemes; the enumeration over small values stands beside each verdict.
 #include <catch2/catch.hpp>
 
-#include "couplet/phase/context.hpp"
+#include "phase/context.hpp"
 
 using namespace couplet::phase;
 

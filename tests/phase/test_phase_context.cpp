@@ -2,7 +2,7 @@
 // exhaustive checks below (or test_phase_property.cpp) confirm by evaluation.
 #include <catch2/catch.hpp>
 
-#include "couplet/phase/context.hpp"
+#include "phase/context.hpp"
 
 #include <cln/integer.h>
 #include <cln/rational_io.h>

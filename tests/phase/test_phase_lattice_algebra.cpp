@@ -1,8 +1,8 @@
 // The two integer-algebra building blocks of the phase group, checked against brute force.
 #include <catch2/catch.hpp>
 
-#include "couplet/phase/affine_lattice.hpp"
-#include "couplet/phase/modular_echelon.hpp"
+#include "phase/affine_lattice.hpp"
+#include "phase/modular_echelon.hpp"
 
 #include <cstdint>
 #include <random>

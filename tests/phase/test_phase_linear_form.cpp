@@ -1,6 +1,6 @@
 #include <catch2/catch.hpp>
 
-#include "couplet/phase/linear_form.hpp"
+#include "phase/linear_form.hpp"
 
 #include <stdexcept>
 

@@ -5,7 +5,7 @@
 // the phase group must agree with what the enumeration sees.
 #include <catch2/catch.hpp>
 
-#include "couplet/phase/context.hpp"
+#include "phase/context.hpp"
 
 #include <cln/integer.h>
 #include <cln/rational_io.h>

@@ -4,7 +4,7 @@
 // documented in readability.hpp, restated here), whenever that member has at most four terms.
 #include <catch2/catch.hpp>
 
-#include "couplet/phase/context.hpp"
+#include "phase/context.hpp"
 
 #include <cln/integer.h>
 #include <cln/rational_io.h>

@@ -6,7 +6,7 @@
 #include <fstream>
 #include <unistd.h>
 
-#include "couplet/print/print.hpp"
+#include "print/print.hpp"
 #include "print/random_source.hpp"
 #include "support.hpp"
 

@@ -1,7 +1,7 @@
 // Text output is valid input: parse(print(e)) gives back e, on generated expressions.
 #include <catch2/catch.hpp>
 
-#include "couplet/print/print.hpp"
+#include "print/print.hpp"
 #include "print/random_source.hpp"
 #include "support.hpp"
 

@@ -7,8 +7,8 @@
 #include <string>
 #include <vector>
 
-#include "couplet/rules/engine.hpp"
-#include "couplet/simplify.hpp"
+#include "rules/engine.hpp"
+#include "simplify/simplify.hpp"
 #include "jsum_check.hpp"
 #include "support.hpp"
 

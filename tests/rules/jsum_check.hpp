@@ -6,8 +6,8 @@
 #include <random>
 #include <string>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/model/symbols.hpp"
+#include "eval/evaluate.hpp"
+#include "model/symbols.hpp"
 #include "rules/structure.hpp"
 
 namespace couplet::testing {

@@ -9,9 +9,9 @@
 #include <string>
 #include <vector>
 
-#include "couplet/model/quantum.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/rules/rule.hpp"
+#include "model/quantum.hpp"
+#include "model/symbols.hpp"
+#include "rules/rule.hpp"
 #include "rules/structure.hpp"
 
 namespace couplet::testing {

@@ -4,8 +4,8 @@
 // the input at sampled points.
 #include <catch2/catch.hpp>
 
-#include "couplet/rules/engine.hpp"
-#include "couplet/simplify.hpp"
+#include "rules/engine.hpp"
+#include "simplify/simplify.hpp"
 #include "cli_simplify.hpp"
 #include "support.hpp"
 

@@ -4,10 +4,10 @@
 
 #include <random>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/rules/rule.hpp"
-#include "couplet/simplify.hpp"
-#include "couplet/symmetry/symmetries.hpp"
+#include "model/symbols.hpp"
+#include "rules/rule.hpp"
+#include "simplify/simplify.hpp"
+#include "canonical/symmetries.hpp"
 #include "jsum_check.hpp"
 #include "random_jsum.hpp"
 #include "support.hpp"

@@ -2,8 +2,8 @@
 // hold (every j <= 4) and 100 arbitrary points where both sides must vanish together.
 #include <catch2/catch.hpp>
 
-#include "couplet/model/symbols.hpp"
-#include "couplet/rules/rule.hpp"
+#include "model/symbols.hpp"
+#include "rules/rule.hpp"
 
 using namespace couplet;
 using namespace couplet::rules;

@@ -4,7 +4,7 @@
 #include <catch2/catch.hpp>
 
 #include "cli_simplify.hpp"
-#include "couplet/print/print.hpp"
+#include "print/print.hpp"
 #include "rules/roots.hpp"
 
 using namespace couplet;

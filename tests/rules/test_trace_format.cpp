@@ -2,7 +2,7 @@
 // term before and after in the re-readable text notation.
 #include <catch2/catch.hpp>
 
-#include "couplet/rules/engine.hpp"
+#include "rules/engine.hpp"
 #include "support.hpp"
 
 using namespace couplet;

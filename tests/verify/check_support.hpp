@@ -3,9 +3,9 @@
 
 #include <string>
 
-#include "couplet/print/print.hpp"
-#include "couplet/verify/identity_check.hpp"
-#include "couplet/verify/phase_fit.hpp"
+#include "print/print.hpp"
+#include "verify/identity_check.hpp"
+#include "verify/phase_fit.hpp"
 #include "support.hpp"
 
 namespace couplet::testing {

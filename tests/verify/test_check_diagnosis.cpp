@@ -9,8 +9,8 @@
 #include <cmath>
 
 #include "check_support.hpp"
-#include "couplet/verify/domain.hpp"
-#include "couplet/verify/sampler.hpp"
+#include "verify/domain.hpp"
+#include "verify/sampler.hpp"
 
 using couplet::testing::check_text;
 using couplet::verify::verdict;

@@ -3,7 +3,7 @@
 
 #include <random>
 
-#include "couplet/verify/gf2.hpp"
+#include "verify/gf2.hpp"
 
 using couplet::verify::gf2::bits;
 

@@ -2,12 +2,12 @@
 // give that phase back (or one equal to it at every point), and a pattern no phase has, none.
 #include <catch2/catch.hpp>
 
-#include "couplet/eval/evaluate.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/print/print.hpp"
-#include "couplet/verify/domain.hpp"
-#include "couplet/verify/phase_fit.hpp"
-#include "couplet/verify/sampler.hpp"
+#include "eval/evaluate.hpp"
+#include "model/symbols.hpp"
+#include "print/print.hpp"
+#include "verify/domain.hpp"
+#include "verify/phase_fit.hpp"
+#include "verify/sampler.hpp"
 #include "support.hpp"
 
 using namespace couplet;

@@ -5,8 +5,8 @@
 #include <algorithm>
 #include <cstdlib>
 
-#include "couplet/verify/domain.hpp"
-#include "couplet/verify/sampler.hpp"
+#include "verify/domain.hpp"
+#include "verify/sampler.hpp"
 #include "support.hpp"
 
 using namespace couplet;

@@ -3,8 +3,8 @@
 #include <catch2/catch.hpp>
 
 #include "cli/execute.hpp"
-#include "couplet/model/symbols.hpp"
-#include "couplet/verify/simplification_check.hpp"
+#include "model/symbols.hpp"
+#include "verify/simplification_check.hpp"
 #include "support.hpp"
 
 using namespace couplet;

@@ -4,8 +4,8 @@
 #include <stdexcept>
 
 #include "check_support.hpp"
-#include "couplet/verify/simplification_check.hpp"
-#include "couplet/verify/tolerant_evaluation.hpp"
+#include "verify/simplification_check.hpp"
+#include "verify/tolerant_evaluation.hpp"
 
 using namespace couplet;
 

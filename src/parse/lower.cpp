@@ -1,0 +1,364 @@
+#include "parse/lower.hpp"
+
+#include <boost/variant/apply_visitor.hpp>
+#include <cctype>
+#include <map>
+#include <set>
+#include <sstream>
+
+#include "model/rewrite.hpp"
+#include "model/symbols.hpp"
+
+namespace couplet {
+
+using namespace GiNaC;
+
+namespace {
+
+
+std::size_t offset_of(const ast::operand& o);
+
+struct offset_visitor : boost::static_visitor<std::size_t> {
+    std::size_t operator()(const ast::nil&) const { return 0; }
+    template <typename Node>
+    std::size_t operator()(const Node& n) const {
+        return static_cast<const ast::located&>(n).offset;
+    }
+};
+
+std::size_t offset_of(const ast::operand& o) { return boost::apply_visitor(offset_visitor{}, o); }
+
+std::set<symbol, ex_is_less> symbols_in(const ex& e) {
+    std::set<symbol, ex_is_less> out;
+    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it)
+        if (is_a<symbol>(*it)) out.insert(ex_to<symbol>(*it));
+    return out;
+}
+
+class lowering {
+public:
+    lowering(const source_file& src, lowered_program& out) : src_(src), out_(out) {}
+
+    void collect_definitions(const std::vector<parsed_statement>& parsed) {
+        for (const auto& p : parsed)
+            if (const auto* d = boost::get<ast::definition>(&p.tree))
+                later_definitions_.emplace(d->name.name, d->name.offset);
+    }
+
+    lowered_statement statement(const parsed_statement& p) {
+        lowered_statement s;
+        s.span = p.span;
+        s.text = src_.text().substr(p.span.begin, p.span.end - p.span.begin);
+        while (!s.text.empty() && std::isspace(static_cast<unsigned char>(s.text.back())))
+            s.text.pop_back();
+        boost::apply_visitor([&](const auto& node) { this->fill(s, node); }, p.tree);
+        return s;
+    }
+
+private:
+    // ---- statements ----------------------------------------------------------------------
+
+    void fill(lowered_statement& s, const ast::declaration& d) {
+        s.kind = request_kind::declaration;
+        for (const ast::identifier& n : d.names) {
+            if (definitions_.count(n.name) || later_definitions_.count(n.name))
+                throw user_error(n.offset, "'" + n.name + "' is defined by 'let'; it cannot be "
+                                                            "declared '" + d.parity + "'");
+            out_.numbers.declare_parity(n.name, d.parity == "int" ? qn_parity::integer
+                                                                  : qn_parity::half_odd,
+                                        n.offset);
+        }
+    }
+
+    void fill(lowered_statement& s, const ast::definition& d) {
+        s.kind = request_kind::definition;
+        if (definitions_.count(d.name.name))
+            throw user_error(d.name.offset, "'" + d.name.name + "' is already defined");
+        if (const quantum_number* q = out_.numbers.find(d.name.name))
+            throw user_error(d.name.offset, "'" + d.name.name + "' is already used as a quantum "
+                                            "number (first at " + where(q->first_offset) + ")");
+        later_definitions_.erase(d.name.name);
+        s.name = d.name.name;
+        s.value = expression(d.value);
+        definitions_.emplace(d.name.name, s.value);
+    }
+
+    void fill(lowered_statement& s, const ast::simplify_request& r) {
+        s.kind = request_kind::simplify;
+        s.bare = !starts_with_keyword(s.text, "simplify");
+        s.value = expression(r.value);
+    }
+
+    void fill(lowered_statement& s, const ast::check_request& r) {
+        s.kind = request_kind::check;
+        s.bare = !starts_with_keyword(s.text, "check");
+        s.value = expression(r.lhs);
+        s.rhs = expression(r.rhs);
+    }
+
+    void fill(lowered_statement& s, const ast::eval_request& r) {
+        s.kind = request_kind::eval;
+        s.value = expression(r.value);
+        auto present = symbols_in(s.value);
+        for (const ast::assignment& a : r.at) {
+            const quantum_number* q = out_.numbers.find(a.name.name);
+            if (!q || !present.count(q->symbol))
+                throw user_error(a.name.offset,
+                                 "'" + a.name.name + "' does not occur in the expression to evaluate");
+            // A copy: lowering the value can add names to the table and move its entries.
+            const symbol assigned = q->symbol;
+            for (const value_assignment& earlier : s.at)
+                if (earlier.name.is_equal(assigned))
+                    throw user_error(a.name.offset, "'" + a.name.name + "' is assigned twice");
+            ex v = expression(a.value);
+            if (!is_a<numeric>(v) || !ex_to<numeric>(v).is_rational())
+                throw user_error(a.value.offset, "the value of '" + a.name.name +
+                                                     "' must be a number like 1, -2 or 3/2");
+            s.at.push_back({assigned, ex_to<numeric>(v), a.value.offset});
+        }
+        for (const value_assignment& a : s.at) check_admissible(a, s.at);
+    }
+
+    // j >= 0 in (1/2)N, parity as declared, and j - m integer where j is known.
+    void check_admissible(const value_assignment& a, const std::vector<value_assignment>& all) {
+        const quantum_number& q = out_.numbers.at(a.name);
+        const std::string shown = q.name + "=" + to_text(a.value);
+        if (!(2 * a.value).is_integer())
+            throw user_error(a.offset, shown + " is not admissible: quantum numbers are multiples of 1/2");
+        bool integral = a.value.is_integer();
+        if (q.parity == qn_parity::integer && !integral)
+            throw user_error(a.offset, shown + " is not admissible: '" + q.name + "' is declared 'int'");
+        if (q.parity == qn_parity::half_odd && integral)
+            throw user_error(a.offset, shown + " is not admissible: '" + q.name + "' is declared 'half'");
+        if (q.role != qn_role::projection && a.value.is_negative())
+            throw user_error(a.offset, shown + " is not admissible: an angular momentum is never negative");
+        if (q.role == qn_role::projection && q.owner) {
+            exmap values;
+            for (const value_assignment& b : all) values[b.name] = b.value;
+            ex j = q.owner->subs(values);
+            if (is_a<numeric>(j) && !(ex_to<numeric>(j) - a.value).is_integer())
+                throw user_error(a.offset, shown + " is not admissible: its angular momentum is " +
+                                               to_text(ex_to<numeric>(j)) + ", and j - m must be an integer");
+        }
+    }
+
+    // ---- expressions ---------------------------------------------------------------------
+
+    ex expression(const ast::expression& e) {
+        // A chain of one operator class; '^' chains group to the right.
+        if (!e.rest.empty() && e.rest.front().op == '^') {
+            std::vector<std::pair<ex, std::size_t>> parts{{operand(e.first), offset_of(e.first)}};
+            for (const ast::operation& op : e.rest) parts.emplace_back(operand(op.rhs), offset_of(op.rhs));
+            ex value = parts.back().first;
+            for (std::size_t i = parts.size() - 1; i-- > 0;)
+                value = power_of(parts[i].first, value, parts[i + 1].second);
+            return value;
+        }
+        ex value = operand(e.first);
+        for (const ast::operation& op : e.rest) {
+            ex rhs = operand(op.rhs);
+            switch (op.op) {
+                case '+': value = value + rhs; break;
+                case '-': value = value - rhs; break;
+                case '*': value = value * rhs; break;
+                case '/':
+                    if (rhs.is_zero()) throw user_error(offset_of(op.rhs), "division by zero");
+                    value = value / rhs;
+                    break;
+            }
+        }
+        return value;
+    }
+
+    ex power_of(const ex& base, const ex& exponent, std::size_t exponent_offset) {
+        if (base.is_equal(-1)) {
+            if (!is_linear_form(exponent))
+                throw user_error(exponent_offset, "the exponent of (-1) must be linear in the quantum "
+                                                  "numbers, like j1+j2-m or 2*j");
+            return make_phase(exponent);
+        }
+        if (!is_a<numeric>(exponent) || !ex_to<numeric>(exponent).is_rational())
+            throw user_error(exponent_offset, "only (-1) may be raised to a symbolic power; for a "
+                                              "phase write (-1)^(...) with the parentheses");
+        numeric n = ex_to<numeric>(exponent);
+        if (abs(n) > max_integer_exponent)
+            throw user_error(exponent_offset, "exponent too large (at most " +
+                                                  std::to_string(max_integer_exponent) + " in size)");
+        if (base.is_zero() && !n.is_pos_integer())
+            throw user_error(exponent_offset, "division by zero");
+        if (is_a<numeric>(base) && ex_to<numeric>(base).is_negative() && !n.is_integer())
+            throw user_error(exponent_offset, "a fractional power of a negative number is not real");
+        return pow(base, exponent);
+    }
+
+    ex operand(const ast::operand& o) {
+        return boost::apply_visitor([&](const auto& node) { return this->node(node); }, o);
+    }
+
+    ex node(const ast::nil&) { return 0; }
+    ex node(const ast::expression& e) { return expression(e); }
+    ex node(const ast::negated& n) { return -operand(n.value); }
+
+    ex node(const ast::number& n) {
+        if (n.digits.size() > max_number_digits)
+            throw user_error(n.offset, "number too long (at most " + std::to_string(max_number_digits) +
+                                           " digits)");
+        return numeric(n.digits.c_str());
+    }
+
+    ex node(const ast::identifier& id) {
+        if (auto it = definitions_.find(id.name); it != definitions_.end()) return it->second;
+        if (auto it = later_definitions_.find(id.name); it != later_definitions_.end())
+            throw user_error(id.offset, "'" + id.name + "' is used before its definition at " +
+                                            where(it->second));
+        return out_.numbers.symbol_for(id.name, id.offset);
+    }
+
+    ex node(const ast::call& c) {
+        const std::string& f = c.function.name;
+        auto need = [&](std::size_t n) {
+            if (c.args.size() != n)
+                throw user_error(c.function.offset, f + " takes " + std::to_string(n) + " argument" +
+                                                        (n == 1 ? "" : "s") + ", found " +
+                                                        std::to_string(c.args.size()));
+        };
+        if (f == "sqrt") {
+            need(1);
+            ex x = expression(c.args[0]);
+            if (is_a<numeric>(x) && ex_to<numeric>(x).is_negative())
+                throw user_error(c.args[0].offset, "sqrt of a negative number");
+            return sqrt(x);
+        }
+        if (f == "delta") {
+            need(2);
+            return kdelta(slot(c.args[0], qn_role::unknown), slot(c.args[1], qn_role::unknown));
+        }
+        if (f == "tri") {
+            need(3);
+            return triangle(slot(c.args[0], qn_role::angular), slot(c.args[1], qn_role::angular),
+                            slot(c.args[2], qn_role::angular));
+        }
+        throw user_error(c.function.offset, "unknown function '" + f +
+                                                "'; the functions are sqrt, delta and tri");
+    }
+
+    ex node(const ast::bracket_symbol& b) {
+        const std::size_t want_rows = b.kind == "9j" ? 3 : 2;
+        const char* layout = b.kind == "3j"   ? "3j(j1, j2, j3; m1, m2, m3)"
+                             : b.kind == "6j" ? "6j{a, b, c; d, e, f}"
+                                              : "9j{a, b, c; d, e, f; g, h, i}";
+        if (b.rows.size() != want_rows)
+            throw user_error(b.offset, "a " + b.kind + " symbol has " + std::to_string(want_rows) +
+                                           " rows of 3 entries separated by ';', like " + layout +
+                                           "; found " + std::to_string(b.rows.size()) + " row" +
+                                           (b.rows.size() == 1 ? "" : "s"));
+        for (std::size_t r = 0; r < b.rows.size(); ++r)
+            if (b.rows[r].size() != 3)
+                throw user_error(b.rows[r].front().offset,
+                                 "row " + std::to_string(r + 1) + " of this " + b.kind + " has " +
+                                     std::to_string(b.rows[r].size()) + " entries; every row has 3, like " +
+                                     layout);
+        if (b.kind == "3j") {
+            exvector j, m;
+            for (const auto& e : b.rows[0]) j.push_back(slot(e, qn_role::angular));
+            for (std::size_t k = 0; k < 3; ++k) m.push_back(projection_slot(b.rows[1][k], j[k]));
+            return wigner3j(j[0], j[1], j[2], m[0], m[1], m[2]);
+        }
+        exvector a;
+        for (const auto& row : b.rows)
+            for (const auto& e : row) a.push_back(slot(e, qn_role::angular));
+        if (b.kind == "6j") return wigner6j(a[0], a[1], a[2], a[3], a[4], a[5]);
+        return wigner9j(a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7], a[8]);
+    }
+
+    ex node(const ast::clebsch_gordan& c) {
+        ex j1 = slot(c.j1, qn_role::angular), j2 = slot(c.j2, qn_role::angular),
+           j = slot(c.j, qn_role::angular);
+        ex m1 = projection_slot(c.m1, j1), m2 = projection_slot(c.m2, j2), m = projection_slot(c.m, j);
+        return clebsch(j1, m1, j2, m2, j, m);
+    }
+
+    ex node(const ast::sum& s) {
+        lst indices;
+        for (const ast::identifier& i : s.indices) {
+            if (definitions_.count(i.name) || later_definitions_.count(i.name))
+                throw user_error(i.offset, "'" + i.name + "' is defined by 'let' and cannot be a "
+                                                          "summation index");
+            symbol sym = out_.numbers.symbol_for(i.name, i.offset);
+            for (const ex& earlier : indices)
+                if (earlier.is_equal(sym))
+                    throw user_error(i.offset, "'" + i.name + "' is listed twice as a summation index");
+            indices.append(sym);
+        }
+        ex body = expression(s.body);
+        for (std::size_t k = 0; k < indices.nops(); ++k)
+            if (!body.has(indices.op(k)))
+                throw user_error(s.indices[k].offset, "summation index '" + s.indices[k].name +
+                                                          "' does not occur in the body of the sum");
+        return make_sum(body, indices);
+    }
+
+    // ---- slots of coupling symbols -------------------------------------------------------
+
+    template <typename Node>
+    ex slot(const Node& node, qn_role role) {
+        ex value = lower_any(node);
+        std::size_t at = offset_of_node(node);
+        if (!is_linear_form(value))
+            throw user_error(at, "entries of coupling symbols must be linear in the quantum numbers, "
+                                 "like j1+1/2, -m or J-1");
+        if (role != qn_role::unknown)
+            for (const symbol& s : symbols_in(value)) out_.numbers.assign_role(s, role, at);
+        return value;
+    }
+
+    template <typename Node>
+    ex projection_slot(const Node& node, const ex& owner) {
+        ex value = slot(node, qn_role::projection);
+        auto syms = symbols_in(value);
+        if (syms.size() == 1) out_.numbers.set_owner_if_unset(*syms.begin(), owner);
+        return value;
+    }
+
+    ex lower_any(const ast::expression& e) { return expression(e); }
+    ex lower_any(const ast::operand& o) { return operand(o); }
+    static std::size_t offset_of_node(const ast::expression& e) { return e.offset; }
+    static std::size_t offset_of_node(const ast::operand& o) { return offset_of(o); }
+
+    std::string where(std::size_t offset) const {
+        auto p = src_.locate(offset);
+        return std::to_string(p.line) + ":" + std::to_string(p.column);
+    }
+
+    static bool starts_with_keyword(const std::string& text, const std::string& keyword) {
+        return text.compare(0, keyword.size(), keyword) == 0 &&
+               (text.size() == keyword.size() ||
+                !(std::isalnum(static_cast<unsigned char>(text[keyword.size()])) ||
+                  text[keyword.size()] == '_' || text[keyword.size()] == '\''));
+    }
+
+    static std::string to_text(const numeric& n) {
+        std::ostringstream os;
+        os << n;
+        return os.str();
+    }
+
+    const source_file& src_;
+    lowered_program& out_;
+    std::map<std::string, ex> definitions_;
+    std::map<std::string, std::size_t> later_definitions_;
+};
+
+}  // namespace
+
+lowered_program lower_program(const source_file& src, const std::vector<parsed_statement>& parsed) {
+    lowered_program out;
+    lowering l(src, out);
+    l.collect_definitions(parsed);
+    for (const parsed_statement& p : parsed) out.statements.push_back(l.statement(p));
+    return out;
+}
+
+lowered_program read_program(const source_file& src) { return lower_program(src, parse_program(src)); }
+
+}  // namespace couplet
