@@ -1,7 +1,5 @@
 #include "verify/check_summary.hpp"
 
-#include <sstream>
-
 #include "print/print.hpp"
 #include "verify/phase_fit.hpp"
 
@@ -46,34 +44,6 @@ std::string summary(const check_report& r) {
             return out;
         }
     }
-}
-
-nlohmann::json to_json(const counterexample& c) {
-    nlohmann::json at = nlohmann::json::object();
-    for (const auto& [name, value] : c.at) {
-        std::ostringstream os;
-        os << value;
-        at[name] = os.str();
-    }
-    return {{"at", at}, {"assignment", c.at.empty() ? "" : describe(c)}, {"lhs", c.lhs.to_string()},
-            {"rhs", c.rhs.to_string()}};
-}
-
-nlohmann::json to_json(const check_report& r) {
-    nlohmann::json j;
-    j["holds"] = r.result == verdict::undecided ? nlohmann::json() : nlohmann::json(r.result == verdict::holds);
-    j["verdict"] = verdict_name(r.result);
-    j["missing_phase"] = r.missing_phase ? nlohmann::json(phase_text(*r.missing_phase)) : nlohmann::json();
-    j["missing_factor"] = r.missing_factor ? nlohmann::json(to_text(*r.missing_factor)) : nlohmann::json();
-    j["points"] = r.points;
-    j["nonzero_points"] = r.nonzero;
-    j["symbolic_proof"] = r.proved_symbolically;
-    j["depth"] = r.depth;
-    j["exhaustive"] = r.complete;
-    j["counterexample"] = r.result != verdict::holds && r.counter ? to_json(*r.counter) : nlohmann::json();
-    j["note"] = r.note.empty() ? nlohmann::json() : nlohmann::json(r.note);
-    j["stopped_by_time_limit"] = r.stopped;
-    return j;
 }
 
 }  // namespace couplet::verify

@@ -2,8 +2,9 @@
 // line with the documented exit codes and JSON fields.
 #include <catch2/catch.hpp>
 
-#include "cli/execute.hpp"
+#include "api/statement_runner.hpp"
 #include "model/symbols.hpp"
+#include "print/print.hpp"
 #include "verify/simplification_check.hpp"
 #include "support.hpp"
 
@@ -72,26 +73,24 @@ TEST_CASE("the options --samples and --depth set how many points are checked", "
 }
 
 TEST_CASE("a wrong simplification prints the input unchanged and fails with code 3", "[verify][cli]") {
-    lowered_program p = testing::lower_text("simplify 3j(b, a, c; mb, ma, mc)");
-    cli::execute_options o;
+    couplet::program p = couplet::parse("simplify 3j(b, a, c; mb, ma, mc)");
     // A simplifier with a bug: it reorders the columns but forgets the phase (DLMF 34.3.9).
-    o.simplifier = [](const GiNaC::ex& e, const quantum_numbers&) {
+    auto broken = [](const GiNaC::ex& e, const quantum_numbers&) {
         return wigner3j(e.op(1), e.op(0), e.op(2), e.op(4), e.op(3), e.op(5));
     };
-    cli::outcome out = cli::execute(p.statements.back(), p, cli::bare_meaning::simplify, o);
+    couplet::result out = execute_statement(p.internals(), 0, {}, couplet::bare_meaning::simplify, broken);
     CHECK(out.internal_failure);
-    CHECK(out.record.at("result") == "3j(b, a, c; mb, ma, mc)");
-    CHECK(out.record.at("verified") == false);
+    CHECK(to_text(out.answer) == "3j(b, a, c; mb, ma, mc)");
+    CHECK(nlohmann::json::parse(couplet::to_json(out)).at("verified") == false);
     CHECK(out.diagnostic.find("internal check failed") != std::string::npos);
     CHECK(out.diagnostic.find("3j(a, b, c; ma, mb, mc)") != std::string::npos);
     CHECK(cli::internal_failure == 3);
 }
 
 TEST_CASE("a simplifier that calls a false identity 0 is an internal failure of check", "[verify][cli]") {
-    lowered_program p = testing::lower_text("check 6j{a, b, c; d, e, f} == 0");
-    cli::execute_options o;
-    o.simplifier = [](const GiNaC::ex&, const quantum_numbers&) { return GiNaC::ex(0); };
-    cli::outcome out = cli::execute(p.statements.back(), p, cli::bare_meaning::simplify, o);
+    couplet::program p = couplet::parse("check 6j{a, b, c; d, e, f} == 0");
+    auto zero = [](const GiNaC::ex&, const quantum_numbers&) { return GiNaC::ex(0); };
+    couplet::result out = execute_statement(p.internals(), 0, {}, couplet::bare_meaning::simplify, zero);
     CHECK(out.internal_failure);
     CHECK(out.diagnostic.find("internal check failed") != std::string::npos);
 }

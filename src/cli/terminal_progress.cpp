@@ -1,8 +1,8 @@
-#include "verify/progress.hpp"
+#include "cli/terminal_progress.hpp"
 
 #include <ostream>
 
-namespace couplet::verify {
+namespace couplet::cli {
 
 void terminal_progress::operator()(std::size_t done, std::size_t total) {
     auto now = clock::now();
@@ -23,4 +23,4 @@ terminal_progress::~terminal_progress() {
     if (shown_) out_ << "\r\033[K" << std::flush;
 }
 
-}  // namespace couplet::verify
+}  // namespace couplet::cli

@@ -1,4 +1,4 @@
-#include "cli/latex_report.hpp"
+#include "api/latex_document.hpp"
 
 #include <sstream>
 
@@ -7,7 +7,7 @@
 #include "print/print.hpp"
 #include "print/step_change.hpp"
 
-namespace couplet::cli {
+namespace couplet {
 
 using GiNaC::ex;
 
@@ -30,18 +30,18 @@ std::string point_latex(const std::vector<std::pair<std::string, GiNaC::numeric>
 
 }  // namespace
 
-void latex_report::begin() {
+void latex_document::begin() {
     if (document_)
         out_ << "\\documentclass{article}\n\\usepackage{amsmath}\n\\allowdisplaybreaks\n\\begin{document}\n";
 }
 
-void latex_report::end(const source_file& src) {
+void latex_document::end(const source_file& src) {
     comments_before(src, src.text().size());
     if (document_) out_ << "\\end{document}\n";
 }
 
 // Each run of comment lines is one paragraph; a blank line or a statement ends it.
-void latex_report::comments_before(const source_file& src, std::size_t offset) {
+void latex_document::comments_before(const source_file& src, std::size_t offset) {
     const std::string& text = src.text();
     std::string paragraph;
     auto flush = [&] {
@@ -68,33 +68,34 @@ void latex_report::comments_before(const source_file& src, std::size_t offset) {
     read_up_to_ = std::max(read_up_to_, offset);
 }
 
-void latex_report::display(const display_formula& f) {
+void latex_document::display(const display_formula& f) {
     out_ << layout_display(f, document_ ? display_style::document : display_style::fragment);
 }
 
-std::vector<latex_piece> latex_report::side(const ex& e) {
+std::vector<latex_piece> latex_document::side(const ex& e) {
     legend_for(e);
     return latex_pieces(named(e), display_width_em);
 }
 
-ex latex_report::named(const ex& e) const {
+ex latex_document::named(const ex& e) const {
     ex out = e;
     for (auto it = names_.rbegin(); it != names_.rend(); ++it) out = replaced(out, it->first, it->second);
     return out;
 }
 
-void latex_report::legend_for(const ex& e) {
+void latex_document::legend_for(const ex& e) {
     if (!document_ || triangle_explained_ || !has_triangle(e)) return;
     triangle_explained_ = true;
     out_ << "\nHere $\\{a\\, b\\, c\\}$ stands for the triangle condition: it is $1$ when "
             "$|a-b| \\le c \\le a+b$ and $a+b+c$ is an integer, and $0$ otherwise.\n\n";
 }
 
-void latex_report::statement(const source_file& src, const lowered_statement& s, const outcome& o) {
-    comments_before(src, s.span.begin);
-    read_up_to_ = std::max(read_up_to_, s.span.end);
-    switch (s.kind) {
-        case request_kind::definition: {
+void latex_document::statement(const source_file& src, const result& r) {
+    const couplet::statement& s = r.source;
+    comments_before(src, s.offset);
+    read_up_to_ = std::max(read_up_to_, s.end);
+    switch (r.done) {
+        case statement_kind::definition: {
             display_formula f;
             f.sides = {raw(latex_identifier(s.name)), side(s.value)};
             f.relations = {"="};
@@ -102,42 +103,41 @@ void latex_report::statement(const source_file& src, const lowered_statement& s,
             names_.emplace_back(s.value, GiNaC::symbol(s.name));
             return;
         }
-        case request_kind::simplify:
-            if (o.value) return evaluation(s, o);
-            return simplification(s, o);
-        case request_kind::eval: return evaluation(s, o);
-        case request_kind::check: return check(s, o);
+        case statement_kind::simplify: return simplification(r);
+        case statement_kind::eval: return evaluation(r);
+        case statement_kind::check: return check(r);
         default: return;
     }
 }
 
-void latex_report::simplification(const lowered_statement& s, const outcome& o) {
-    if (document_ && !o.steps.empty()) {
+void latex_document::simplification(const result& r) {
+    const couplet::statement& s = r.source;
+    if (document_ && r.steps && !r.steps->empty()) {
         display_formula input;
         input.sides = {side(s.value)};
         input.tag = "input";
         display(input);
-        steps(o);
-        display_formula result;
-        result.sides = {side(o.result)};
-        result.relations = {};
-        result.tag = "result";
-        display(result);
+        steps(*r.steps);
+        display_formula answer;
+        answer.sides = {side(r.answer)};
+        answer.relations = {};
+        answer.tag = "result";
+        display(answer);
         return;
     }
     display_formula f;
     f.sides = {side(s.value)};
-    if (!o.result.is_equal(s.value)) {
-        f.sides.push_back(side(o.result));
+    if (!r.answer.is_equal(s.value)) {
+        f.sides.push_back(side(r.answer));
         f.relations = {"="};
     }
     display(f);
 }
 
 // One display per step: what it changed, with the identity and its reference at the side.
-void latex_report::steps(const outcome& o) {
+void latex_document::steps(const std::vector<step>& steps) {
     int k = 0;
-    for (const simplification_step& step : o.steps) {
+    for (const step& step : steps) {
         auto [before, after] = changed_parts(step.before, step.after);
         // A change to a bare number (a triangle that a symbol beside it implies) reads only in context.
         if (GiNaC::is_a<GiNaC::numeric>(before) || GiNaC::is_a<GiNaC::numeric>(after))
@@ -150,65 +150,63 @@ void latex_report::steps(const outcome& o) {
     }
 }
 
-void latex_report::evaluation(const lowered_statement& s, const outcome& o) {
+void latex_document::evaluation(const result& r) {
+    const couplet::statement& s = r.source;
     display_formula f;
-    f.sides = {side(s.value), raw(exact_to_latex(*o.value))};
+    f.sides = {side(s.value), raw(r.value->latex)};
     f.relations = {"="};
-    if (o.value->terms().size() != 1 || o.value->terms().begin()->first != 1) {
-        f.sides.push_back(raw(o.record.at("decimal").get<std::string>()));
+    if (!r.value->rational) {
+        f.sides.push_back(raw(r.value->decimal));
         f.relations.push_back("\\approx");
     }
-    if (!s.at.empty()) {
-        std::vector<std::pair<std::string, GiNaC::numeric>> at;
-        for (const value_assignment& a : s.at) at.emplace_back(a.name.get_name(), a.value);
-        f.notes = {"\\quad\\text{at } " + point_latex(at)};
-    }
+    if (!s.at.empty()) f.notes = {"\\quad\\text{at } " + point_latex(s.at)};
     display(f);
 }
 
-void latex_report::check(const lowered_statement& s, const outcome& o) {
+void latex_document::check(const result& res) {
+    const couplet::statement& s = res.source;
     display_formula f;
     f.sides = {side(s.value), side(s.rhs)};
-    if (!o.check) {  // an internal conflict: the message on standard error says what happened
+    if (!res.check) {  // an internal conflict: the message on standard error says what happened
         f.relations = {"\\overset{?}{=}"};
         f.notes = {"\\quad" + words("(internal check failed)")};
         display(f);
         return;
     }
-    const verify::check_report& r = *o.check;
+    const check_record& r = *res.check;
     std::ostringstream points;
     points << r.points;
     switch (r.result) {
-        case verify::verdict::holds:
+        case verdict::holds:
             f.relations = {"="};
             f.notes = {"\\quad" + words(r.points == 0 ? "(holds vacuously: no admissible point)"
                                       : r.proved_symbolically
                                           ? "(proved; checked exactly at " + points.str() + " points)"
                                           : "(verified exactly at " + points.str() + " points)")};
             break;
-        case verify::verdict::undecided:
+        case verdict::undecided:
             f.relations = {"\\overset{?}{=}"};
             f.notes = {"\\quad" + words("(undecided: stopped by the time limit after " + points.str() + " points)")};
             break;
-        case verify::verdict::fails_by_phase:
+        case verdict::fails_by_phase:
             f.relations = {"\\neq"};
             f.notes = {"\\quad" + words("holds after multiplying the right side by ") + " " +
                        to_latex(make_phase(*r.missing_phase))};
             break;
-        case verify::verdict::fails_by_factor:
+        case verdict::fails_by_factor:
             f.relations = {"\\neq"};
             f.notes = {"\\quad" + words("holds after multiplying the right side by ") + " " +
                        to_latex(*r.missing_factor)};
             break;
-        case verify::verdict::fails:
+        case verdict::fails:
             f.relations = {"\\neq"};
             if (r.counter)
                 f.notes = {"\\quad" + words("at ") + point_latex(r.counter->at),
-                           "\\quad" + words("the left side is ") + exact_to_latex(r.counter->lhs) +
-                               words(", the right side ") + exact_to_latex(r.counter->rhs)};
+                           "\\quad" + words("the left side is ") + r.counter->lhs.latex +
+                               words(", the right side ") + r.counter->rhs.latex};
             break;
     }
     display(f);
 }
 
-}  // namespace couplet::cli
+}  // namespace couplet

@@ -13,19 +13,19 @@
 #include <utility>
 #include <vector>
 
-#include "cli/execute.hpp"
+#include "couplet/couplet.hpp"
 #include "print/latex_display.hpp"
 #include "source/source.hpp"
 
-namespace couplet::cli {
+namespace couplet {
 
-class latex_report {
+class latex_document {
 public:
-    latex_report(bool document, std::ostream& out) : document_(document), out_(out) {}
+    latex_document(bool document, std::ostream& out) : document_(document), out_(out) {}
 
     void begin();
     // The comment lines of `src` between the previous statement and this one come first.
-    void statement(const source_file& src, const lowered_statement& s, const outcome& o);
+    void statement(const source_file& src, const result& r);
     void end(const source_file& src);
 
 private:
@@ -35,10 +35,10 @@ private:
     std::vector<latex_piece> raw(const std::string& tex) const { return {{tex, true}}; }
     GiNaC::ex named(const GiNaC::ex& e) const;
     void legend_for(const GiNaC::ex& e);
-    void simplification(const lowered_statement& s, const outcome& o);
-    void evaluation(const lowered_statement& s, const outcome& o);
-    void check(const lowered_statement& s, const outcome& o);
-    void steps(const outcome& o);
+    void simplification(const result& r);
+    void evaluation(const result& r);
+    void check(const result& r);
+    void steps(const std::vector<step>& steps);
 
     bool document_;
     std::ostream& out_;
@@ -47,4 +47,4 @@ private:
     bool triangle_explained_ = false;
 };
 
-}  // namespace couplet::cli
+}  // namespace couplet

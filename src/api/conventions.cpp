@@ -1,0 +1,61 @@
+#include <sstream>
+
+#include "couplet/couplet.hpp"
+#include "eval/evaluate.hpp"
+#include "limits/run_limits.hpp"
+#include "parse/lower.hpp"
+#include "parse/parse.hpp"
+
+namespace couplet {
+
+namespace {
+
+const char* const conventions_text_head = R"(Conventions:
+  Condon-Shortley phases: the ladder coefficients sqrt((j-+m)(j+-m+1)) are real and
+  non-negative, and <j1 j1, j2 J-j1 | J J> > 0.  All 3j and CG values are real.
+  <j1 m1, j2 m2 | J M> = (-1)^(j1-j2+M) sqrt(2J+1) 3j(j1, j2, J; m1, m2, -M).
+  Admissible values: j >= 0 in steps of 1/2; |m| <= j with j-m an integer; a triad (a, b, c)
+  needs |a-b| <= c <= a+b with a+b+c an integer.  A symbol whose numbers violate these is 0.
+
+Language (one statement per line or separated by ';'; '#' starts a comment):
+  int l, k | half s            declare integer / half-odd angular momenta
+  let W = EXPR                 name an expression
+  simplify EXPR   or  EXPR     simplify (a bare expression)
+  check A == B    or  A == B   decide whether A equals B
+  eval EXPR [at a=1/2, m=0]    exact value and a decimal
+  3j(j1, j2, j3; m1, m2, m3)   6j{a, b, c; d, e, f}   9j{a, b, c; d, e, f; g, h, i}
+  <j1 m1, j2 m2 | J M>         (-1)^(EXPR)  sqrt(EXPR)  delta(x, y)  tri(a, b, c)
+  sum(i, k : EXPR)             + - * / ^ and parentheses; numbers like 3 and 1/2
+
+Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
+collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product
+imposes it; never more sums (then symbols, then terms) than the input in canonical form.
+
+Checks and simplifications are verified by exact evaluation at every admissible point with
+all free j <= --depth (default 2; at most 4000 points, chosen at random beyond that)
+and at --samples random points with larger j (default 200).  At default settings simplify
+checks fresh points of these kinds for about as long as the simplification took (at least
+12 points); give --depth or --samples to check them all.
+
+)";
+
+// Written from the constants themselves, so the help cannot drift from what is enforced.
+std::string bounds_text() {
+    std::ostringstream os;
+    evaluation_limits eval;
+    os << "Bounds (each stops the statement with a message and exit status 2):\n"
+       << "  --max-terms N (default " << run_limits{}.max_terms << ") terms from expanding one expression or one\n"
+       << "    sum's body;  --time-limit S (default none) wall-clock seconds for the whole input;\n"
+       << "  2j <= " << eval.max_twice_j << " for every entry of a symbol; " << eval.max_sum_terms
+       << " summands in one evaluation;\n"
+       << "  nesting of parentheses, calls and powers at most " << max_nesting << " deep; numbers of at most "
+       << max_number_digits << " digits;\n"
+       << "  integer powers x^n with |n| <= " << max_integer_exponent << ".\n\n";
+    return os.str();
+}
+
+}  // namespace
+
+std::string conventions_text() { return conventions_text_head + bounds_text(); }
+
+}  // namespace couplet

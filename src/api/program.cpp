@@ -1,0 +1,53 @@
+#include "api/program_parts.hpp"
+
+namespace couplet {
+
+namespace {
+
+statement_kind public_kind(request_kind k) {
+    switch (k) {
+        case request_kind::declaration: return statement_kind::declaration;
+        case request_kind::definition: return statement_kind::definition;
+        case request_kind::check: return statement_kind::check;
+        case request_kind::eval: return statement_kind::eval;
+        default: return statement_kind::simplify;
+    }
+}
+
+statement public_view(const lowered_statement& s) {
+    statement out;
+    out.kind = public_kind(s.kind);
+    out.text = s.text;
+    out.name = s.name;
+    out.value = s.value;
+    out.rhs = s.rhs;
+    for (const value_assignment& a : s.at) out.at.emplace_back(a.name.get_name(), a.value);
+    out.offset = s.span.begin;
+    out.end = s.span.end;
+    return out;
+}
+
+}  // namespace
+
+input_error as_input_error(const source_file& src, const user_error& e) {
+    auto pos = src.locate(e.offset());
+    return input_error(e.what(), format_diagnostic(src, e), pos.line, pos.column);
+}
+
+program parse(const std::string& text, const std::string& name) {
+    auto p = std::make_shared<program::parts>(program::parts{source_file(name, text), {}, {}});
+    try {
+        p->lowered = read_program(p->source);
+    } catch (const user_error& e) {
+        throw as_input_error(p->source, e);
+    }
+    for (const lowered_statement& s : p->lowered.statements) p->statements.push_back(public_view(s));
+    return program(p);
+}
+
+std::size_t program::size() const { return parts_->statements.size(); }
+const statement& program::operator[](std::size_t k) const { return parts_->statements.at(k); }
+const std::string& program::name() const { return parts_->source.name(); }
+const std::string& program::text() const { return parts_->source.text(); }
+
+}  // namespace couplet

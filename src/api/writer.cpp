@@ -1,0 +1,48 @@
+#include <ostream>
+
+#include "api/latex_document.hpp"
+#include "api/program_parts.hpp"
+
+namespace couplet {
+
+struct writer::state {
+    output_format format;
+    std::ostream& out;
+    latex_document latex;
+    const program::parts* input = nullptr;
+};
+
+writer::writer(output_format format, std::ostream& out)
+    : state_(new state{format, out,
+                       latex_document(format == output_format::latex_document, out)}) {}
+
+writer::~writer() = default;
+
+namespace {
+bool is_latex(output_format f) { return f == output_format::latex_document || f == output_format::latex_fragment; }
+}  // namespace
+
+void writer::begin(const program& p) {
+    state_->input = &p.internals();
+    if (is_latex(state_->format)) state_->latex.begin();
+}
+
+void writer::write(const result& r) {
+    if (is_latex(state_->format)) {
+        state_->latex.statement(state_->input->source, r);
+        return;
+    }
+    // Declarations and definitions print nothing: they only prepare later statements.
+    if (r.done == statement_kind::definition || r.done == statement_kind::declaration) return;
+    state_->out << (state_->format == output_format::json ? to_json(r) : to_text(r)) << "\n";
+}
+
+void writer::end() {
+    if (is_latex(state_->format)) state_->latex.end(state_->input->source);
+}
+
+void writer::error(const input_error& e) {
+    if (state_->format == output_format::json) state_->out << to_json(e) << "\n";
+}
+
+}  // namespace couplet
