@@ -42,9 +42,11 @@ exact_value value_of(const exact::number& n) {
     return v;
 }
 
-ex run_simplifier(const statement_context& c) {
+// The answer, and the derivation when the built-in simplifier made it.
+simplification run_simplifier(const statement_context& c) {
     const ex& e = c.s.value;
-    ex result = c.simplifier ? c.simplifier(e, c.numbers) : simplify_expression(e, c.numbers);
+    simplification done = c.simplifier ? simplification{c.simplifier(e, c.numbers), {}} : simplify_with_steps(e, c.numbers);
+    ex& result = done.answer;
     // The CG form is applied before verification, so that what is printed is what was checked.
     if (c.o.prefer_clebsch)
         result = merge_phases(reduce_phases(merge_phases(symmetry::prefer_clebsch(result)), c.numbers));
@@ -52,15 +54,15 @@ ex run_simplifier(const statement_context& c) {
         const ex rearranged = merge_phases(in_written_arrangement(result, e));
         if (!rearranged.is_equal(result)) result = merge_phases(reduce_phases(rearranged, c.numbers));
     }
-    return result;
+    return done;
 }
 
 // The recorded steps as a reader sees them: like terms collected as in an answer (the j-sum
 // stage works on expanded summands) and phases reduced, except where the step is the phase
 // reduction itself.
-std::vector<step> readable_steps(const quantum_numbers& numbers) {
+std::vector<step> readable_steps(const std::vector<simplification_step>& steps, const quantum_numbers& numbers) {
     std::vector<step> out;
-    for (const simplification_step& s : last_simplification_steps()) {
+    for (const simplification_step& s : steps) {
         auto reading = [&](const ex& x) {
             return s.shown_as_recorded ? x : collected_terms(phases_reduced_for_reading(x, numbers));
         };
@@ -75,10 +77,11 @@ result simplify(const statement_context& c) {
     auto started = std::chrono::steady_clock::now();
     result r;
     r.done = statement_kind::simplify;
-    r.answer = run_simplifier(c);
+    simplification done = run_simplifier(c);
+    r.answer = done.answer;
     verify::verification_budget budget;
     if (c.o.budgeted_verification) budget = verify::matching_budget(std::chrono::steady_clock::now() - started);
-    if (c.o.steps) r.steps = readable_steps(c.numbers);
+    if (c.o.steps) r.steps = readable_steps(done.steps, c.numbers);
     if (!c.o.verify) return r;
     verify::simplification_check v;
     try {

@@ -501,24 +501,3 @@ jsum_result reduce_jsums(const ex& e, const quantum_numbers& numbers) {
 }
 
 }  // namespace couplet::rules
-
-namespace couplet {
-
-using GiNaC::ex;
-
-namespace {
-std::vector<rules::rule_step>& trace_store() {
-    static std::vector<rules::rule_step> store;
-    return store;
-}
-}  // namespace
-
-ex apply_jsum_rules(const ex& e, const quantum_numbers& numbers) {
-    rules::jsum_result r = rules::reduce_jsums(e, numbers);
-    trace_store() = std::move(r.trace);
-    return r.value;
-}
-
-const std::vector<rules::rule_step>& last_jsum_trace() { return trace_store(); }
-
-}  // namespace couplet

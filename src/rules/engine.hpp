@@ -36,9 +36,6 @@ jsum_result reduce_jsums(const GiNaC::ex& e, const quantum_numbers& numbers);
 }  // namespace couplet
 
 namespace couplet {
-// The stage as simplify_expression calls it; the trace of the last call is kept for the CLI.
-GiNaC::ex apply_jsum_rules(const GiNaC::ex& e, const quantum_numbers& numbers);
-const std::vector<rules::rule_step>& last_jsum_trace();
 // Three lines per step: "rule name (reference)", then "  before: ..." and "  after:  ..." in
 // the text notation (to_text).
 std::vector<std::string> format_jsum_trace(const std::vector<rules::rule_step>& trace);

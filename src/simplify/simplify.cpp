@@ -21,11 +21,10 @@ using GiNaC::ex;
 using GiNaC::is_a;
 
 namespace {
-thread_local std::vector<simplification_step> steps_taken;
 
-void record_network_steps(const std::vector<network::reduction_step>& moves) {
+void record_network_steps(const std::vector<network::reduction_step>& moves, std::vector<simplification_step>& steps) {
     for (const auto& m : moves)
-        steps_taken.push_back({m.move, m.reference, thaw_weights(m.before), thaw_weights(m.after)});
+        steps.push_back({m.move, m.reference, thaw_weights(m.before), thaw_weights(m.after)});
 }
 
 // An answer is never worse than the input's own form: not more sums; with as many sums, not
@@ -54,12 +53,14 @@ ex canonical_form(const ex& e, const quantum_numbers& numbers) {
     return canonical_form_of_arranged(symmetry::canonicalize_symbols(normalize(e), numbers), numbers);
 }
 
-const std::vector<simplification_step>& last_simplification_steps() { return steps_taken; }
+GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers) {
+    return simplify_with_steps(e, numbers).answer;
+}
 
 // Each stage keeps the value at every admissible assignment; the order matters only in that
 // phases are reduced after the symmetries have produced theirs.
-GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers) {
-    steps_taken.clear();
+simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& numbers) {
+    std::vector<simplification_step> steps_taken;
     GiNaC::ex x = normalize(e);
     const bool has_clebsch = x.has(clebsch(GiNaC::wild(0), GiNaC::wild(1), GiNaC::wild(2), GiNaC::wild(3),
                                            GiNaC::wild(4), GiNaC::wild(5)));
@@ -70,22 +71,23 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
         steps_taken.push_back({"Clebsch-Gordan coefficients as 3j symbols", "DLMF 34.1.1", written, merge_phases(x)});
     std::vector<network::reduction_step> completeness;
     x = network::reduce_completeness(x, numbers, &completeness);
-    record_network_steps(completeness);
+    record_network_steps(completeness, steps_taken);
     x = nest_projection_sums(x, numbers);
     check_expansion(x);
     x = merge_phases(freeze_weights(x, numbers).expand());
     check_deadline();
     std::vector<network::reduction_step> moves;
     x = thaw_weights(network::reduce_msums(x, numbers, &moves));
-    record_network_steps(moves);
+    record_network_steps(moves, steps_taken);
     check_deadline();
     const ex unreduced = merge_phases(x);
     x = merge_phases(reduce_phases(x, numbers));
     if (!x.is_equal(unreduced))
         steps_taken.push_back({"phases reduced in the phase group", "common practice, no source", unreduced, x, true});
     check_deadline();
-    x = apply_jsum_rules(x, numbers);
-    steps_taken.insert(steps_taken.end(), last_jsum_trace().begin(), last_jsum_trace().end());
+    rules::jsum_result jsums = rules::reduce_jsums(x, numbers);
+    x = jsums.value;
+    steps_taken.insert(steps_taken.end(), jsums.trace.begin(), jsums.trace.end());
     x = merge_phases(x);
     const ex closed = closed_form(x);
     if (!closed.is_equal(x))
@@ -100,7 +102,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
                                x, input});
         x = input;
     }
-    return x;
+    return {x, std::move(steps_taken)};
 }
 
 }  // namespace couplet

@@ -26,8 +26,12 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
 // is never worse than this form of its input: not more sums, then symbols, then terms.
 GiNaC::ex canonical_form(const GiNaC::ex& e, const quantum_numbers& numbers);
 
-// The steps of the last simplify_expression call on this thread, in order, for the
-// derivation trace (`simplify --steps`): the network moves, then the j-sum rules.
-const std::vector<simplification_step>& last_simplification_steps();
+// The answer with the steps that led to it, in order, for the derivation trace (`simplify
+// --steps`): CG to 3j, the network moves, the phase reduction, the j-sum rules, the closed form.
+struct simplification {
+    GiNaC::ex answer;
+    std::vector<simplification_step> steps;
+};
+simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& numbers);
 
 }  // namespace couplet

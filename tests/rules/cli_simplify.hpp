@@ -56,12 +56,12 @@ inline void require_exact(const simplified& s) {
     CHECK(s.report.nonzero >= 10);
 }
 
-// The rules the j-sum stage applied to the last statement of `text`, in order, one per line.
+// The identities simplify applied to the last statement of `text`, in order, one per line.
 inline std::string rules_applied(const std::string& text) {
     auto program = lower_text(text);
-    simplify_expression(program.statements.back().value, program.numbers);
     std::string out;
-    for (const auto& step : last_jsum_trace()) out += step.rule + "\n";
+    for (const auto& step : simplify_with_steps(program.statements.back().value, program.numbers).steps)
+        out += step.rule + "\n";
     return out;
 }
 
