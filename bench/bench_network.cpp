@@ -15,6 +15,7 @@
 #include "model/result_shape.hpp"
 #include "network/cut.hpp"
 #include "network/reduce.hpp"
+#include "network/rewrites.hpp"
 #include "simplify/simplify.hpp"
 #include "canonical/symmetries.hpp"
 #include "network/network_corpus.hpp"
@@ -36,7 +37,8 @@ void row(const std::string& name, const std::string& text) {
     GiNaC::ex reduced = network::reduce_msums(x, program.numbers, &steps);
     double network_ms = ms_since(t0);
     int cuts = 0;
-    for (const auto& s : steps) cuts += s.reference == network::cut_reference;
+    for (const auto& s : steps)
+        cuts += s.rule == network::two_line_cut_identity().name || s.rule == network::three_line_cut_identity().name;
     auto t1 = std::clock();
     GiNaC::ex out = simplify_expression(input, program.numbers);
     double total_ms = ms_since(t1);

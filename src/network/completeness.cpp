@@ -7,6 +7,7 @@
 #include "model/same_value.hpp"
 #include "model/symbols.hpp"
 #include "canonical/symmetries.hpp"
+#include "network/rewrites.hpp"
 
 namespace couplet::network {
 
@@ -14,8 +15,6 @@ using namespace GiNaC;
 
 namespace {
 
-const char* const completeness_name = "3j completeness";
-const char* const completeness_reference = "DLMF 34.3.17";
 
 // The summand split into its (-1) exponent, the 3j that hold J or M, and the rest.
 struct split_summand {
@@ -241,8 +240,8 @@ private:
                     if (!i.is_equal(j) && !i.is_equal(m)) rest.append(i);
                 ex after = rest.nops() == 0 ? *reduced : make_sum(*reduced, rest);
                 if (steps_)
-                    steps_->push_back({completeness_name, completeness_reference,
-                                       merge_phases(make_sum(s.body, s.indices)), merge_phases(after)});
+                    steps_->push_back(step_by(completeness_identity(), merge_phases(make_sum(s.body, s.indices)),
+                                              merge_phases(after)));
                 if (rest.nops() == 0) return after;
                 return (*this)(after);  // another pair may remain
             }

@@ -6,6 +6,7 @@
 
 #include "model/same_value.hpp"
 #include "model/symbols.hpp"
+#include "network/rewrites.hpp"
 
 namespace couplet::network {
 
@@ -229,7 +230,7 @@ std::optional<separation> separate(const msum_term& t, const line_cut& c, const 
 
     exmap rename_a, rename_b, identify;
     if (size == 2) {
-        out.name = "two-line cut";
+        out.used = &two_line_cut_identity();
         // The invariant of A is proportional to delta(j1, j2) (-1)^(j1 - m1') delta(m1' + m2', 0)
         // with m' the flipped A entries: q = s p on the joined line.
         const int s = -flipped_a[0] * flipped_a[1];
@@ -250,7 +251,7 @@ std::optional<separation> separate(const msum_term& t, const line_cut& c, const 
             out.factor = 1 / (2 * kept + 1);
         }
     } else {
-        out.name = "three-line cut";
+        out.used = &three_line_cut_identity();
         // The invariant of A is a multiple of this 3j, and sum(m's : 3j^2) = 1 on its triad.
         ex vertex = wigner3j(j[0], j[1], j[2], flipped_a[0] * p[0], flipped_a[1] * p[1], flipped_a[2] * p[2]);
         body_a *= vertex;

@@ -19,11 +19,10 @@
 #include <string>
 #include <vector>
 
+#include "model/identity.hpp"
 #include "network/term.hpp"
 
 namespace couplet::network {
-
-inline constexpr const char* cut_reference = "factorization theorem, common practice, no source";
 
 struct line_cut {
     std::vector<int> lines;  // indices into msum_term::lines, in the order the new 3j takes them
@@ -43,7 +42,7 @@ struct separation_variant {
 };
 
 struct separation {
-    std::string name;             // "two-line cut" or "three-line cut"
+    const identity* used = nullptr;  // two_line_cut_identity or three_line_cut_identity
     GiNaC::ex factor;             // delta(j1, j2) / (2 j1 + 1) or 1, times the phase free of projections
     GiNaC::ex body_a, body_b;     // the closed parts' summands
     GiNaC::lst indices_a, indices_b;

@@ -12,8 +12,6 @@
 
 namespace couplet::network {
 
-inline constexpr const char* fixed_projection_name = "sum over a projection the selection rule fixes";
-inline constexpr const char* fixed_projection_reference = "DLMF 34.2 (m1+m2+m3 = 0)";
 
 // The term with one such projection substituted and its index dropped, or nothing.
 std::optional<GiNaC::ex> fix_projection_by_vertex(const msum_term& term);

@@ -1,7 +1,8 @@
 // The network moves, each one identity of DLMF chapter 34 written over its own pattern
 // symbols:  sum(summed : (-1)^phase * product of threejs) == result.
 // The graph only chooses where a move applies; apply_move (match.hpp) performs it on the 3j
-// symbols themselves, so each move is checked by exact evaluation of its two sides alone.
+// symbols themselves.  Each move is an identity whose instance is its own two sides, so the
+// shared self-test checks it by exact evaluation alone.
 #pragma once
 
 #include <ginac/ginac.h>
@@ -9,13 +10,12 @@
 #include <string>
 #include <vector>
 
+#include "model/identity.hpp"
 #include "model/quantum.hpp"
 
 namespace couplet::network {
 
-struct move {
-    std::string name;
-    std::string reference;
+struct move : identity {
     std::vector<GiNaC::ex> threejs;  // top rows: pattern j's; bottom rows: +-pattern m's
     GiNaC::ex phase = 0;             // exponent of (-1)
     GiNaC::lst summed;               // the projections the identity sums over
@@ -32,9 +32,6 @@ const std::vector<move>& network_moves();
 // coupled the other way round.  Not in network_moves(): it removes no index, and the reduction
 // chooses where it applies (a line of a shortest cycle, shortening that cycle).
 const move& interchange_move();
-
-// The quantum numbers of the pattern symbols (roles and owners), for evaluating a move.
-const quantum_numbers& pattern_numbers();
 
 // The left side of the identity as an expression.
 GiNaC::ex left_side(const move& m);

@@ -8,24 +8,36 @@ using namespace GiNaC;
 
 namespace {
 
+// All moves share one table of pattern symbols (j1 is the same name in every move).
 struct pattern_symbols {
     quantum_numbers numbers;
-    symbol j(const std::string& name) {
-        symbol s = numbers.symbol_for(name, 0);
-        numbers.assign_role(s, qn_role::angular, 0);
-        return s;
-    }
-    symbol m(const std::string& name, const symbol& owner) {
-        symbol s = numbers.symbol_for(name, 0);
-        numbers.assign_role(s, qn_role::projection, 0);
-        numbers.set_owner_if_unset(s, owner);
-        return s;
-    }
+    pattern_table table{numbers};
+    symbol j(const std::string& name) { return table.angular(name); }
+    symbol m(const std::string& name, const symbol& owner) { return table.projection(name, owner); }
 };
 
 pattern_symbols& symbols() {
     static pattern_symbols p;
     return p;
+}
+
+// A move with its instance: its own two sides, in the pattern symbols declared so far.
+move make_move(const std::string& name, const std::string& reference, std::vector<ex> threejs, const ex& phase,
+               const lst& summed, const ex& result, const lst& introduced_angular = {},
+               const lst& introduced_projections = {}) {
+    move m;
+    m.name = name;
+    m.reference = reference;
+    m.threejs = std::move(threejs);
+    m.phase = phase;
+    m.summed = summed;
+    m.result = result;
+    m.introduced_angular = introduced_angular;
+    m.introduced_projections = introduced_projections;
+    m.left = left_side(m);
+    m.right = right_side(m);
+    m.numbers = symbols().numbers;
+    return m;
 }
 
 std::vector<move> build() {
@@ -55,46 +67,46 @@ std::vector<move> build() {
                 all.append(m[r][c]);
                 if (c < 2) first_two_columns.append(m[r][c]);
             }
-        out.push_back({"six 3j to a 9j", "DLMF 34.6.1",
-                       {row(0), column(0), row(1), column(1), row(2), column(2)}, 0, all, ninej, lst{}, lst{}});
+        out.push_back(make_move("six 3j to a 9j", "DLMF 34.6.1",
+                                {row(0), column(0), row(1), column(1), row(2), column(2)}, 0, all, ninej));
         // One column left open: by the Wigner-Eckart theorem the 3j of that column times the 9j.
-        out.push_back({"five 3j to 3j times 9j", "DLMF 34.6.1 with 34.3.16",
-                       {row(0), column(0), row(1), column(1), row(2)}, 0, first_two_columns,
-                       column(2) * ninej, lst{}, lst{}});
+        out.push_back(make_move("five 3j to 3j times 9j", "DLMF 34.6.1 with 34.3.16",
+                                {row(0), column(0), row(1), column(1), row(2)}, 0, first_two_columns,
+                                column(2) * ninej));
     }
 
     // The 6j as a closed network of four 3j.
-    out.push_back({"four 3j to a 6j", "DLMF 34.4.1",
+    out.push_back(make_move("four 3j to a 6j", "DLMF 34.4.1",
                    {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, l2, l3, m1, u2, -u3),
                     wigner3j(l1, j2, l3, -u1, m2, u3), wigner3j(l1, l2, j3, u1, -u2, m3)},
                    l1 + l2 + l3 + u1 + u2 + u3,
                    lst{m1, m2, m3, u1, u2, u3},
-                   wigner6j(j1, j2, j3, l1, l2, l3), lst{}, lst{}});
+                   wigner6j(j1, j2, j3, l1, l2, l3)));
 
     // A triangle with one free line at each corner: the Wigner-Eckart form 3j x 6j.
-    out.push_back({"triangle to 3j times 6j", "DLMF 34.5.23",
+    out.push_back(make_move("triangle to 3j times 6j", "DLMF 34.5.23",
                    {wigner3j(j1, l2, l3, m1, u2, -u3), wigner3j(l1, j2, l3, -u1, m2, u3),
                     wigner3j(l1, l2, j3, u1, -u2, m3)},
                    l1 + l2 + l3 + u1 + u2 + u3,
                    lst{u1, u2, u3},
-                   wigner3j(j1, j2, j3, m1, m2, m3) * wigner6j(j1, j2, j3, l1, l2, l3), lst{}, lst{}});
+                   wigner3j(j1, j2, j3, m1, m2, m3) * wigner6j(j1, j2, j3, l1, l2, l3)));
 
     // Two vertices joined by two lines: 3j orthogonality.
-    out.push_back({"bubble to a delta", "DLMF 34.3.16",
+    out.push_back(make_move("bubble to a delta", "DLMF 34.3.16",
                    {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, j2, k3, m1, m2, n3)},
                    0,
                    lst{m1, m2},
-                   kdelta(j3, k3) * kdelta(m3, n3) * triangle(j1, j2, j3) / (2 * j3 + 1), lst{}, lst{}});
+                   kdelta(j3, k3) * kdelta(m3, n3) * triangle(j1, j2, j3) / (2 * j3 + 1)));
 
     // A line from a vertex back to itself: the metric is sqrt(2j+1) times the 3j with a zero
     // entry, and orthogonality closes the loop (DLMF 34.3.16 with 34.3.1's (j j 0) value).
-    out.push_back({"loop to a delta", "DLMF 34.3.16 with 34.3.1",
+    out.push_back(make_move("loop to a delta", "DLMF 34.3.16 with 34.3.1",
                    {wigner3j(j1, j1, c, m1, -m1, g)},
                    j1 - m1,
                    lst{m1},
                    // tri(j1, j1, c) is 1 where c = 0, but it keeps the consumed triad for the
                    // phase group: (-1)^c is an integer power because 2 j1 + c is an integer.
-                   sqrt(2 * j1 + 1) * kdelta(c, 0) * kdelta(g, 0) * triangle(j1, j1, c), lst{}, lst{}});
+                   sqrt(2 * j1 + 1) * kdelta(c, 0) * kdelta(g, 0) * triangle(j1, j1, c)));
     return out;
 }
 
@@ -106,14 +118,11 @@ move build_interchange() {
     // The four-leg tensor coupled as (a b) e (c d) expanded in the one coupled as (a c) x (b d):
     // the coefficient is 3j orthogonality (DLMF 34.3.17) applied to the closed four-3j network,
     // a 6j by DLMF 34.4.1 (equivalently DLMF 34.5.23 with 34.3.17).
-    move m{"recoupling interchange", "DLMF 34.5.23 with 34.3.17",
-           {wigner3j(a, b, e, al, be, ep), wigner3j(e, c, d, -ep, ga, de)},
-           e - ep,
-           lst{ep},
-           make_phase(b + c + e + x + x - xi) * (2 * x + 1) * wigner6j(a, b, e, d, c, x) *
-               wigner3j(a, c, x, al, ga, xi) * wigner3j(x, b, d, -xi, be, de),
-           lst{x}, lst{xi}};
-    return m;
+    return make_move("recoupling interchange", "DLMF 34.5.23 with 34.3.17",
+                     {wigner3j(a, b, e, al, be, ep), wigner3j(e, c, d, -ep, ga, de)}, e - ep, lst{ep},
+                     make_phase(b + c + e + x + x - xi) * (2 * x + 1) * wigner6j(a, b, e, d, c, x) *
+                         wigner3j(a, c, x, al, ga, xi) * wigner3j(x, b, d, -xi, be, de),
+                     lst{x}, lst{xi});
 }
 
 }  // namespace
@@ -126,12 +135,6 @@ const std::vector<move>& network_moves() {
 const move& interchange_move() {
     static const move m = build_interchange();
     return m;
-}
-
-const quantum_numbers& pattern_numbers() {
-    network_moves();
-    interchange_move();
-    return symbols().numbers;
 }
 
 ex left_side(const move& m) {

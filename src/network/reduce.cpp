@@ -11,6 +11,7 @@
 #include "network/term.hpp"
 #include "canonical/symmetries.hpp"
 #include "canonical/phase_reduction.hpp"
+#include "network/rewrites.hpp"
 
 namespace couplet::network {
 
@@ -121,8 +122,6 @@ std::optional<std::pair<ex, lst>> resolve_projection_delta(const ex& body, const
     return std::nullopt;
 }
 
-constexpr const char* projection_delta_reference = "definition of the Kronecker delta, common practice, no source";
-
 class reducer : public map_function {
 public:
     reducer(const quantum_numbers& numbers, std::vector<reduction_step>* steps) : numbers_(numbers), steps_(steps) {
@@ -165,7 +164,7 @@ private:
             if (auto d = resolve_projection_delta(body, indices)) {
                 ex n = merge_phases(d->second.nops() ? make_sum(d->first, d->second) : d->first);
                 if (phases_provable_(n)) {
-                    note("delta on a summed projection", projection_delta_reference, before, n);
+                    note(projection_delta_identity(), before, n);
                     changed = true;
                     if (!is_a<index_sum>(n)) return tidy(n);
                     body = ex_to<index_sum>(n).body();
@@ -176,12 +175,11 @@ private:
             term_analysis a = analyze_term(body, indices, numbers_);
             if (!a.term) break;
             std::optional<ex> next;
-            std::string taken, reference;
+            const identity* taken = nullptr;
             for (const move& m : network_moves()) {
                 next = apply_move(m, *a.term, phases_provable_);
                 if (next) {
-                    taken = m.name;
-                    reference = m.reference;
+                    taken = &m;
                     break;
                 }
             }
@@ -194,7 +192,7 @@ private:
                 if (next) {
                     ++interchanges_;
                     ex n = merge_phases(*next);
-                    note(interchange_move().name, interchange_move().reference, before, n);
+                    note(interchange_move(), before, n);
                     if (is_a<index_sum>(n)) return tidy(reduce_inside(ex_to<index_sum>(n)));
                     return tidy(n);
                 }
@@ -203,13 +201,12 @@ private:
                 // Last resort, since it leaves entries the moves do not match.
                 next = fix_projection_by_vertex(*a.term);
                 if (next && !phases_provable_(*next)) next.reset();
-                taken = fixed_projection_name;
-                reference = fixed_projection_reference;
+                taken = &fixed_projection_identity();
             }
             if (!next) break;
             changed = true;
             ex n = merge_phases(*next);
-            note(taken, reference, before, n);
+            note(*taken, before, n);
             if (!is_a<index_sum>(n)) return tidy(n);
             body = ex_to<index_sum>(n).body();
             indices = ex_to<index_sum>(n).indices();
@@ -219,8 +216,8 @@ private:
     }
 
     // The step is recorded when it is taken, so a move inside a part it made follows it.
-    void note(const std::string& name, const std::string& reference, const ex& before, const ex& after) {
-        if (steps_) steps_->push_back({name, reference, before, after});
+    void note(const identity& used, const ex& before, const ex& after) {
+        if (steps_) steps_->push_back(step_by(used, before, after));
     }
 
     // The first cut of two lines, else of three, that separates with provable phases; each
@@ -238,7 +235,7 @@ private:
             for (const line_cut& c : find_cuts(t, size)) {
                 auto s = separate(t, c, fresh);
                 if (!s || !phases_provable_(joined(*s))) continue;
-                note(s->name, cut_reference, before, merge_phases(joined(*s)));
+                note(*s->used, before, merge_phases(joined(*s)));
                 outer_.push_back(make_sum(s->body_b, s->indices_b));
                 ex a = reduce_term(s->body_a, s->indices_a);
                 outer_.back() = a;

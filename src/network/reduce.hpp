@@ -8,16 +8,13 @@
 #include <string>
 #include <vector>
 
+#include "model/identity.hpp"
 #include "model/quantum.hpp"
 
 namespace couplet::network {
 
-struct reduction_step {
-    std::string move;       // the move's name
-    std::string reference;  // its DLMF equation
-    GiNaC::ex before;       // the term the move changed, as it stood
-    GiNaC::ex after;        // and what the move made of it
-};
+// The move or rewrite applied, with the term it changed as it stood and as it left it.
+using reduction_step = derivation_step;
 
 // Expects 3j (not CG) symbols and merged phases, as canonicalize_symbols and merge_phases
 // leave them.  Steps taken are appended to `steps` when given.

@@ -15,6 +15,7 @@
 #include "print/print.hpp"
 #include "canonical/symmetries.hpp"
 #include "rules/matcher.hpp"
+#include "rules/rewrites.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
 #include "canonical/phase_reduction.hpp"
@@ -146,9 +147,8 @@ private:
             ex rest = 0, before = 0;
             for (size_t k = 0; k < terms.size(); ++k)
                 (std::count(g.members.begin(), g.members.end(), k) ? before : rest) += terms[k];
-            std::string name = g.renamed ? "sums merged after renaming their indices" : "sums over the same indices merged";
-            trace.insert(trace.begin() + static_cast<long>(before_merge),
-                         rule_step{name, "common practice, no source", before, merged});
+            const identity& used = g.renamed ? sums_merged_renamed_identity() : sums_merged_identity();
+            trace.insert(trace.begin() + static_cast<long>(before_merge), step_by(used, before, merged));
             return rest + *rewritten;
         }
         return std::nullopt;
@@ -185,9 +185,7 @@ private:
         return std::nullopt;
     }
 
-    void record(const std::string& rule, const std::string& reference, const ex& before, const ex& after) {
-        trace.push_back({rule, reference, before, after});
-    }
+    void record(const identity& used, const ex& before, const ex& after) { trace.push_back(step_by(used, before, after)); }
 
     std::optional<ex> step_on_term(const ex& term) {
         if (auto t = vanishing_by_parity(term)) return t;
@@ -212,7 +210,7 @@ private:
             for (const auto& image : images) {
                 if (!image.symbol.is_equal(*it) || image.phase.is_zero()) continue;
                 if (same_phase(ctx, image.phase, 1)) {
-                    record("symbol odd under its own symmetry", "common practice, no source", term, 0);
+                    record(odd_symbol_identity(), term, 0);
                     return ex(0);
                 }
             }
@@ -225,7 +223,7 @@ private:
             for (const local_rule& r : local_rules()) {
                 if (auto rewritten = match_local_rule(r, *it)) {
                     ex after = replaced(term, *it, *rewritten);
-                    record(r.name, r.reference, term, after);
+                    record(r, term, after);
                     return after;
                 }
             }
@@ -246,7 +244,7 @@ private:
             std::vector<ex> others = factors;
             others[k] = f.op(0);
             ex after = product_of(others);
-            record("a repeated delta counts once", "common practice, no source", term, after);
+            record(repeated_delta_identity(), term, after);
             return after;
         }
         for (size_t k = 0; k < factors.size(); ++k) {
@@ -266,7 +264,7 @@ private:
             ex rest = product_of(others);
             if (!rest.has(drop)) continue;
             ex after = factors[k] * rest.subs(exmap{{drop, keep}});
-            record("delta elimination", "common practice, no source", term, after);
+            record(delta_elimination_identity(), term, after);
             return after;
         }
         return std::nullopt;
@@ -299,7 +297,7 @@ private:
                     ex split = 0;
                     for (const ex& p : pieces) split += p;
                     trace.insert(trace.begin() + static_cast<long>(before_split),
-                                 rule_step{"sum split over its terms", "common practice, no source", term, split});
+                                 step_by(sum_split_identity(), term, split));
                     piece = *rewritten;
                     ex after = 0;
                     for (const ex& p : pieces) after += p;
@@ -338,7 +336,7 @@ private:
             if (xs.size() == 1)
                 if (auto collapsed = collapse_delta(term, xs[0], c.with)) {
                     ex after = rebuild(c, *collapsed);
-                    record("delta collapses a sum", "common practice, no source", term, after);
+                    record(delta_collapse_identity(), term, after);
                     return after;
                 }
             if (!full_range(xs)) return std::nullopt;
@@ -346,7 +344,7 @@ private:
                 if (r.indices().size() != xs.size()) continue;
                 if (auto replacement = match_sum_rule(r, xs, c.with, term, numbers_)) {
                     ex after = rebuild(c, *replacement);
-                    record(r.name, r.reference, term, after);
+                    record(r, term, after);
                     return after;
                 }
             }
@@ -385,11 +383,7 @@ private:
             std::vector<ex> others = factors;
             others.erase(others.begin() + static_cast<long>(k));
             for (const auto& image : symmetry::ninej_orbit(factors[k])) {
-                const ex& n = image.symbol;
-                ex expanded = make_phase(image.phase + 2 * x) * (2 * x + 1) *
-                              wigner6j(n.op(0), n.op(1), n.op(2), n.op(5), n.op(8), x).hold() *
-                              wigner6j(n.op(3), n.op(4), n.op(5), n.op(1), x, n.op(7)).hold() *
-                              wigner6j(n.op(6), n.op(7), n.op(8), x, n.op(0), n.op(3)).hold();
+                ex expanded = make_phase(image.phase) * ninej_summand(image.symbol, x);
                 lst bound = s.indices();
                 bound.append(x);
                 ex candidate = product_of(outside) * make_sum(merge_phases(product_of(others) * expanded), bound);
@@ -414,7 +408,7 @@ private:
             best = static_cast<size_t>(std::min_element(ends.begin(), ends.end(), fewer_sums_then_symbols) - ends.begin());
         }
         const outcome& chosen = outcomes[best];
-        record("9j expanded as a sum of three 6j", "DLMF 34.6.2", term, chosen.candidate);
+        record(ninej_expansion_identity(), term, chosen.candidate);
         trace.insert(trace.end(), chosen.steps.begin(), chosen.steps.end());
         return chosen.fired;
     }
@@ -432,12 +426,13 @@ private:
             for (const ex& j : s.indices())
                 if (!j.is_equal(y)) remaining.append(j);
             for (const sum_rule& r : sum_rules()) {
-                if (r.indices().size() != 1 || r.name == "9j as a sum of three 6j") continue;
+                // Not the rule that forms a 9j: it would undo the expansion being probed.
+                if (r.indices().size() != 1 || kind_of(r.result) == symbol_kind::ninej) continue;
                 if (auto replacement = match_sum_rule(r, {y}, with_y, term, numbers_)) {
                     std::vector<ex> outside = factors;
                     outside.erase(outside.begin() + static_cast<long>(k));
                     ex after = product_of(outside) * make_sum(product_of(without_y) * *replacement, remaining);
-                    record(r.name, r.reference, term, after);
+                    record(r, term, after);
                     return after;
                 }
             }

@@ -13,15 +13,17 @@ std::vector<symbol> sum_rule::indices() const {
     return out;
 }
 
-ex sum_rule::left_side() const {
+ex sum_rule::summand() const {
     ex body = make_phase(phase);
-    lst bound;
-    for (const symbol& i : indices()) {
-        body *= pow(2 * i + 1, weight);
-        bound.append(i);
-    }
+    for (const symbol& i : indices()) body *= pow(2 * i + 1, weight);
     for (const ex& f : factors) body *= f;
-    return make_sum(body, bound);
+    return body;
+}
+
+ex sum_rule::left_side() const {
+    lst bound;
+    for (const symbol& i : indices()) bound.append(i);
+    return make_sum(summand(), bound);
 }
 
 namespace {
@@ -160,12 +162,24 @@ sum_rule ninej_sum_rule() {
     return s.r;
 }
 
+// Each rule's instance is its own pattern: left side and result.
+sum_rule with_instance(sum_rule r) {
+    r.left = r.left_side();
+    r.right = r.result;
+    return r;
+}
+
 }  // namespace
 
 const std::vector<sum_rule>& sum_rules() {
-    static const std::vector<sum_rule> all{orthogonality(),         racah_sum(),          biedenharn_elliott(),
-                                           ninej_from_three_sixj(), triangle_dimension(), ninej_orthogonality(),
-                                           ninej_sum_rule(),        weighted_sixj_sum(),  signed_sixj_sum()};
+    static const std::vector<sum_rule> all = [] {
+        std::vector<sum_rule> out;
+        for (sum_rule r : {orthogonality(), racah_sum(), biedenharn_elliott(), ninej_from_three_sixj(),
+                           triangle_dimension(), ninej_orthogonality(), ninej_sum_rule(), weighted_sixj_sum(),
+                           signed_sixj_sum()})
+            out.push_back(with_instance(r));
+        return out;
+    }();
     return all;
 }
 
@@ -212,7 +226,15 @@ local_rule ninej_zero() {
 }  // namespace
 
 const std::vector<local_rule>& local_rules() {
-    static const std::vector<local_rule> all{sixj_zero(), ninej_zero()};
+    static const std::vector<local_rule> all = [] {
+        std::vector<local_rule> out;
+        for (local_rule r : {sixj_zero(), ninej_zero()}) {
+            r.left = r.pattern;
+            r.right = r.result;
+            out.push_back(r);
+        }
+        return out;
+    }();
     return all;
 }
 

@@ -13,6 +13,7 @@
 #include "simplify/closed_form.hpp"
 #include "simplify/frozen_weights.hpp"
 #include "simplify/nest_sums.hpp"
+#include "simplify/stage_identities.hpp"
 #include "canonical/phase_reduction.hpp"
 
 namespace couplet {
@@ -24,7 +25,7 @@ namespace {
 
 void record_network_steps(const std::vector<network::reduction_step>& moves, std::vector<simplification_step>& steps) {
     for (const auto& m : moves)
-        steps.push_back({m.move, m.reference, thaw_weights(m.before), thaw_weights(m.after)});
+        steps.push_back({m.rule, m.reference, thaw_weights(m.before), thaw_weights(m.after)});
 }
 
 // An answer is never worse than the input's own form: not more sums; with as many sums, not
@@ -68,7 +69,7 @@ simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& nu
     x = symmetry::canonicalize_symbols(x, numbers);
     const ex arranged = x;
     if (has_clebsch)
-        steps_taken.push_back({"Clebsch-Gordan coefficients as 3j symbols", "DLMF 34.1.1", written, merge_phases(x)});
+        steps_taken.push_back(step_by(clebsch_as_threej_identity(), written, merge_phases(x)));
     std::vector<network::reduction_step> completeness;
     x = network::reduce_completeness(x, numbers, &completeness);
     record_network_steps(completeness, steps_taken);
@@ -83,7 +84,7 @@ simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& nu
     const ex unreduced = merge_phases(x);
     x = merge_phases(reduce_phases(x, numbers));
     if (!x.is_equal(unreduced))
-        steps_taken.push_back({"phases reduced in the phase group", "common practice, no source", unreduced, x, true});
+        steps_taken.push_back(step_by(phase_reduction_identity(), unreduced, x, true));
     check_deadline();
     rules::jsum_result jsums = rules::reduce_jsums(x, numbers);
     x = jsums.value;
@@ -91,15 +92,13 @@ simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& nu
     x = merge_phases(x);
     const ex closed = closed_form(x);
     if (!closed.is_equal(x))
-        steps_taken.push_back({"like terms collected, implied triangles dropped", "common practice, no source", x,
-                               closed, true});
+        steps_taken.push_back(step_by(closed_form_identity(), x, closed, true));
     x = closed;
     // Counted on the input as canonicalized at the start (its phases do not change the counts);
     // the full canonical form, phases reduced, only when it is the answer.
     if (!never_worse(x, closed_form(merge_phases(arranged)))) {
         const ex input = canonical_form_of_arranged(arranged, numbers);
-        steps_taken.push_back({"the input's own form kept", "no reduction with fewer terms, sums and symbols",
-                               x, input});
+        steps_taken.push_back(step_by(input_form_identity(), x, input));
         x = input;
     }
     return {x, std::move(steps_taken)};

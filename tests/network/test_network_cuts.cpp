@@ -8,6 +8,7 @@
 #include "model/fresh_index.hpp"
 #include "model/normalize.hpp"
 #include "network/cut.hpp"
+#include "network/rewrites.hpp"
 #include "network/reduce.hpp"
 #include "canonical/symmetries.hpp"
 #include "canonical/phase_reduction.hpp"
@@ -185,8 +186,8 @@ TEST_CASE("the reduction separates on a two-line cut before any interchange", "[
     std::vector<network::reduction_step> steps;
     GiNaC::ex out = network::reduce_msums(p.summed, p.program.numbers, &steps);
     REQUIRE(!steps.empty());
-    CHECK(steps.front().move == "two-line cut");
-    CHECK(steps.front().reference == std::string(network::cut_reference));
+    CHECK(steps.front().rule == network::two_line_cut_identity().name);
+    CHECK(steps.front().reference == network::two_line_cut_identity().reference);
     INFO(out);
     CHECK(testing::msum_indices_in(out) == 0);
     auto a = testing::network_agreement_at_points(p.input, out, p.program.numbers, 21, 20, 3);
@@ -200,7 +201,7 @@ TEST_CASE("each recorded move holds the term it changed and what it made of it (
     network::reduce_msums(p.summed, p.program.numbers, &steps);
     REQUIRE(steps.size() >= 3);
     for (std::size_t k = 0; k < steps.size(); ++k) {
-        INFO(steps[k].move << ": " << steps[k].before << " -> " << steps[k].after);
+        INFO(steps[k].rule << ": " << steps[k].before << " -> " << steps[k].after);
         CHECK_FALSE(steps[k].before.is_equal(steps[k].after));
         if (k > 0) CHECK_FALSE(steps[k].before.is_equal(steps[k - 1].before));
         // A move keeps the value (the moves' own DLMF identities): checked exactly at points.  A
