@@ -9,6 +9,8 @@
 
 #include <ginac/ginac.h>
 
+#include <array>
+#include <cstddef>
 #include <string>
 #include <utility>
 
@@ -23,11 +25,39 @@ struct identity {
     quantum_numbers numbers;  // the roles, owners and parities of the pattern symbols
 };
 
+// Builds an identity's pattern symbols with their roles.
+class pattern_table {
+public:
+    explicit pattern_table(quantum_numbers& numbers) : numbers_(numbers) {}
+    GiNaC::symbol angular(const std::string& name, qn_parity parity = qn_parity::any);
+    GiNaC::symbol projection(const std::string& name, const GiNaC::symbol& owner);
+    // Several angular momenta at once: auto [a, b, c] = table.angulars({"a", "b", "c"}).
+    template <std::size_t N>
+    std::array<GiNaC::symbol, N> angulars(const char* const (&names)[N]) {
+        std::array<GiNaC::symbol, N> out;
+        for (std::size_t k = 0; k < N; ++k) out[k] = angular(names[k]);
+        return out;
+    }
+
+private:
+    quantum_numbers& numbers_;
+};
+
 // An identity with its name and reference, its instance still to be written.
 inline identity named_identity(std::string name, std::string reference) {
     identity id;
     id.name = std::move(name);
     id.reference = std::move(reference);
+    return id;
+}
+
+// An identity whose `write(table, left, right)` declares its pattern symbols in the table and
+// writes the two sides of its instance.
+template <class Write>
+identity make_identity(std::string name, std::string reference, Write write) {
+    identity id = named_identity(std::move(name), std::move(reference));
+    pattern_table table(id.numbers);
+    write(table, id.left, id.right);
     return id;
 }
 
@@ -46,15 +76,5 @@ inline derivation_step step_by(const identity& used, const GiNaC::ex& before, co
     return {used.name, used.reference, before, after, shown_as_recorded};
 }
 
-// Builds an identity's pattern symbols with their roles.
-class pattern_table {
-public:
-    explicit pattern_table(quantum_numbers& numbers) : numbers_(numbers) {}
-    GiNaC::symbol angular(const std::string& name, qn_parity parity = qn_parity::any);
-    GiNaC::symbol projection(const std::string& name, const GiNaC::symbol& owner);
-
-private:
-    quantum_numbers& numbers_;
-};
 
 }  // namespace couplet

@@ -62,6 +62,12 @@ private:
     GiNaC::lst indices_;
 };
 
+// A 6j kept as written, neither evaluated nor rearranged: for writing identities' patterns.
+inline GiNaC::ex held_sixj(const GiNaC::ex& a, const GiNaC::ex& b, const GiNaC::ex& c, const GiNaC::ex& d,
+                           const GiNaC::ex& e, const GiNaC::ex& f) {
+    return wigner6j(a, b, c, d, e, f).hold();
+}
+
 GiNaC::ex make_phase(const GiNaC::ex& exponent);
 GiNaC::ex make_sum(const GiNaC::ex& body, const GiNaC::lst& indices);
 

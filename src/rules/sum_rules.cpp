@@ -38,9 +38,7 @@ struct builder {
     }
 };
 
-ex six(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e, const ex& f) {
-    return wigner6j(a, b, c, d, e, f).hold();
-}
+constexpr auto six = held_sixj;
 ex tri(const ex& a, const ex& b, const ex& c) { return triangle(a, b, c).hold(); }
 ex hat2(const ex& j) { return 2 * j + 1; }
 
