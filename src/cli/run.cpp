@@ -9,6 +9,7 @@
 #include <iostream>
 #include <optional>
 #include <sstream>
+#include <utility>
 
 #include "cli/terminal_progress.hpp"
 #include "couplet/couplet.hpp"
@@ -59,15 +60,7 @@ void add_common_options(CLI::App& sub, request& r) {
         ->check(CLI::Range(0.001, 1e6));
 }
 
-}  // namespace
-
-int run(const std::vector<std::string>& args, std::istream& in, std::ostream& out, std::ostream& err) {
-    CLI::App app{"couplet: sums over magnetic quantum numbers of 3j and Clebsch-Gordan products,\n"
-                 "reduced and checked by exact arithmetic."};
-    app.name("couplet");
-    app.footer(help_footer());
-    app.require_subcommand(1, 1);
-    request r;
+void add_commands(CLI::App& app, request& r) {
     struct command_info {
         const char* name;
         const char* help;
@@ -93,7 +86,91 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
             sub->add_flag("--fragment", r.fragment, "Print only the formulas, without the document around them");
         sub->callback([&r, name = c.name] { r.command = name; });
     }
+}
 
+// The input named by the options, with the name messages give it; a message on `err` and
+// nothing where there is none to read.
+std::optional<std::pair<std::string, std::string>> read_input(const request& r, std::istream& in, std::ostream& err) {
+    if (r.has_text) {
+        if (!r.file.empty()) {
+            err << "couplet: give either FILE or -e TEXT, not both\n";
+            return std::nullopt;
+        }
+        return std::make_pair(std::string("<expression>"), r.text);
+    }
+    if (r.file.empty()) {
+        err << "couplet: no input: give a FILE, '-' for standard input, or -e TEXT\n";
+        return std::nullopt;
+    }
+    if (r.file == "-") return std::make_pair(std::string("<stdin>"), read_all(in));
+    std::ifstream f(r.file, std::ios::binary);
+    if (!f) {
+        err << "couplet: cannot read '" << r.file << "'\n";
+        return std::nullopt;
+    }
+    return std::make_pair(r.file, read_all(f));
+}
+
+output_format format_of(const request& r) {
+    if (r.format == "json") return output_format::json;
+    if (r.command != "latex") return r.format == "latex" ? output_format::latex_fragment : output_format::text;
+    return r.fragment ? output_format::latex_fragment : output_format::latex_document;
+}
+
+options options_of(const request& r, bool explicit_sampling) {
+    options o;
+    o.depth = r.depth;
+    o.samples = r.samples;
+    o.verify = !r.no_verify;
+    o.prefer_clebsch = r.prefer == "cg";
+    o.as_written = r.as_written;
+    o.steps = r.steps;
+    o.budgeted_verification = !explicit_sampling;
+    o.max_terms = r.max_terms;
+    o.time_limit_seconds = r.time_limit;
+    return o;
+}
+
+// Every statement in order, each result written as soon as it is done; the exit code.
+int run_input(const request& r, const std::string& name, const std::string& text, options o, std::ostream& out,
+              std::ostream& err) {
+    writer output(format_of(r), out);
+    try {
+        const program input = parse(text, name);
+        // Progress goes to a terminal only: piped or captured stderr stays clean.
+        std::optional<terminal_progress> meter;
+        if (&err == &std::cerr && isatty(fileno(stderr))) {
+            meter.emplace(err);
+            o.progress = meter->callback();
+        }
+        bool any_failed = false, any_internal = false;
+        output.begin(input);
+        auto each = [&](const result& res) {
+            output.write(res);
+            if (!res.diagnostic.empty()) err << res.diagnostic;
+            any_failed = any_failed || res.failed();
+            any_internal = any_internal || res.internal_failure;
+        };
+        run_all(input, o, each, r.command == "eval" ? bare_meaning::eval : bare_meaning::simplify);
+        output.end();
+        return any_internal ? internal_failure : any_failed ? check_false : ok;
+    } catch (const input_error& e) {
+        err << e.diagnostic();
+        output.error(e);
+        return bad_input;
+    }
+}
+
+}  // namespace
+
+int run(const std::vector<std::string>& args, std::istream& in, std::ostream& out, std::ostream& err) {
+    CLI::App app{"couplet: sums over magnetic quantum numbers of 3j and Clebsch-Gordan products,\n"
+                 "reduced and checked by exact arithmetic."};
+    app.name("couplet");
+    app.footer(help_footer());
+    app.require_subcommand(1, 1);
+    request r;
+    add_commands(app, r);
     std::vector<std::string> reversed(args.rbegin(), args.rend() - (args.empty() ? 0 : 1));
     try {
         app.parse(reversed);
@@ -113,69 +190,9 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
         if (sub->count("--expr")) r.has_text = true;
         explicit_sampling = explicit_sampling || sub->count("--depth") || sub->count("--samples");
     }
-
-    std::string name = "<expression>", text;
-    if (r.has_text) {
-        if (!r.file.empty()) {
-            err << "couplet: give either FILE or -e TEXT, not both\n";
-            return bad_input;
-        }
-        text = r.text;
-    } else if (r.file.empty()) {
-        err << "couplet: no input: give a FILE, '-' for standard input, or -e TEXT\n";
-        return bad_input;
-    } else if (r.file == "-") {
-        name = "<stdin>";
-        text = read_all(in);
-    } else {
-        std::ifstream f(r.file, std::ios::binary);
-        if (!f) {
-            err << "couplet: cannot read '" << r.file << "'\n";
-            return bad_input;
-        }
-        name = r.file;
-        text = read_all(f);
-    }
-
-    const output_format format = r.format == "json"   ? output_format::json
-                                 : r.command != "latex" ? (r.format == "latex" ? output_format::latex_fragment
-                                                                                : output_format::text)
-                                 : r.fragment           ? output_format::latex_fragment
-                                                        : output_format::latex_document;
-    writer output(format, out);
-    try {
-        const program input = parse(text, name);
-        options o;
-        o.depth = r.depth;
-        o.samples = r.samples;
-        o.verify = !r.no_verify;
-        o.prefer_clebsch = r.prefer == "cg";
-        o.as_written = r.as_written;
-        o.steps = r.steps;
-        o.budgeted_verification = !explicit_sampling;
-        o.max_terms = r.max_terms;
-        o.time_limit_seconds = r.time_limit;
-        // Progress goes to a terminal only: piped or captured stderr stays clean.
-        std::optional<terminal_progress> meter;
-        if (&err == &std::cerr && isatty(fileno(stderr))) {
-            meter.emplace(err);
-            o.progress = meter->callback();
-        }
-        bool any_failed = false, any_internal = false;
-        output.begin(input);
-        run_all(input, o, [&](const result& res) {
-            output.write(res);
-            if (!res.diagnostic.empty()) err << res.diagnostic;
-            any_failed = any_failed || res.failed();
-            any_internal = any_internal || res.internal_failure;
-        }, r.command == "eval" ? bare_meaning::eval : bare_meaning::simplify);
-        output.end();
-        return any_internal ? internal_failure : any_failed ? check_false : ok;
-    } catch (const input_error& e) {
-        err << e.diagnostic();
-        output.error(e);
-        return bad_input;
-    }
+    auto input = read_input(r, in, err);
+    if (!input) return bad_input;
+    return run_input(r, input->first, input->second, options_of(r, explicit_sampling), out, err);
 }
 
 }  // namespace couplet::cli

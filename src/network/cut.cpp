@@ -148,41 +148,50 @@ std::vector<line_cut> find_cuts(const msum_term& t, int size) {
     return out;
 }
 
-std::optional<separation> separate(const msum_term& t, const line_cut& c, const std::vector<symbol>& fresh,
-                                   const separation_variant& variant) {
-    const std::size_t n = t.threejs.size(), size = c.lines.size();
-    if ((size != 2 && size != 3) || c.in_a.size() != n || (size == 3 && fresh.size() < 3)) return std::nullopt;
-    // The phase as E0 + sum of c_l m_l: each line's own coefficient says how it is contracted.
-    const ex exponent = t.exponent.expand();
+namespace {
+
+// Each line's coefficient in the phase E0 + sum of c_l m_l (it says how the line is
+// contracted), its two ends, and its angular momentum (the same at both ends).
+struct line_reading {
     std::vector<numeric> coefficient;
+    std::vector<std::vector<slot>> slots;
+    std::vector<ex> angular;
+};
+
+std::optional<line_reading> read_lines(const msum_term& t, const ex& exponent) {
+    line_reading r;
     ex lines_part = 0;
     for (const line& l : t.lines) {
         ex k = exponent.coeff(l.projection, 1);
         if (!is_a<numeric>(k) || !ex_to<numeric>(k).is_integer()) return std::nullopt;
-        coefficient.push_back(ex_to<numeric>(k));
+        r.coefficient.push_back(ex_to<numeric>(k));
         lines_part += k * l.projection;
     }
     if (has_any((exponent - lines_part).expand(), t.summed)) return std::nullopt;
-
-    std::vector<std::vector<slot>> slots;
-    std::vector<ex> angular;
     for (const line& l : t.lines) {
         auto s = slots_of(t, l);
         if (s.size() != 2) return std::nullopt;
-        // A contraction joins one angular momentum: the same at both ends.
         ex j0 = t.threejs[s[0].vertex].op(s[0].column), j1 = t.threejs[s[1].vertex].op(s[1].column);
         if (!same_value(j0, j1)) return std::nullopt;
-        slots.push_back(s);
-        angular.push_back(j0);
+        r.slots.push_back(s);
+        r.angular.push_back(j0);
     }
-    std::vector<bool> is_cut(t.lines.size(), false);
-    for (int l : c.lines) is_cut[l] = true;
+    return r;
+}
 
-    // Flips and vertex rules that make every line of A proper: A is then an invariant.
+// The flips and vertex rules that make every line of A proper (A is then an invariant), and
+// the phase of A's own lines with the integer offset that lets it stand on its own.
+struct part_a_form {
+    std::vector<int> flip, rule;
+    ex lines_phase = 0, lines_offset = 0;
+};
+
+std::optional<part_a_form> make_part_a_proper(const msum_term& t, const line_cut& c, const line_reading& r,
+                                              const std::vector<bool>& is_cut) {
     std::vector<std::array<int, 3>> flips, rules;
-    ex a_lines_phase = 0, a_lines_offset = 0;
+    part_a_form a;
     for (std::size_t l = 0; l < t.lines.size(); ++l) {
-        const auto& s = slots[l];
+        const auto& s = r.slots[l];
         bool a0 = c.in_a[s[0].vertex], a1 = c.in_a[s[1].vertex];
         if (is_cut[l]) {
             if (a0 == a1) return std::nullopt;
@@ -191,96 +200,147 @@ std::optional<separation> separate(const msum_term& t, const line_cut& c, const 
         if (a0 != a1) return std::nullopt;  // a line across that the cut does not name
         if (!a0) continue;
         flips.push_back({s[0].vertex, s[1].vertex, s[0].sign == s[1].sign ? 1 : 0});
-        rules.push_back({s[0].vertex, s[1].vertex, coefficient[l].is_odd() ? 0 : 1});
-        a_lines_phase += coefficient[l] * t.lines[l].projection;
+        rules.push_back({s[0].vertex, s[1].vertex, r.coefficient[l].is_odd() ? 0 : 1});
+        a.lines_phase += r.coefficient[l] * t.lines[l].projection;
         // Each c (m + j) is an integer, so A's phase stands on its own.
-        a_lines_offset += coefficient[l] * angular[l];
+        a.lines_offset += r.coefficient[l] * r.angular[l];
     }
-    auto flip = solve_parities(n, flips), rule = solve_parities(n, rules);
+    auto flip = solve_parities(t.threejs.size(), flips), rule = solve_parities(t.threejs.size(), rules);
     if (!flip || !rule) return std::nullopt;
+    a.flip = *flip;
+    a.rule = *rule;
+    return a;
+}
 
-    // Per cut line: its projection, its sign in A, that sign after A's flips, the vertex rule
-    // phase r_a * sign * p it leaves on the line.
+// Per cut line: its projection, its angular momentum, its sign in A after A's flips; and the
+// vertex-rule phase r_a * sign * p (with its offset) that A's rules leave on the cut lines.
+struct cut_reading {
     std::vector<symbol> p;
-    std::vector<int> flipped_a;
     std::vector<ex> j;
+    std::vector<int> flipped_a;
     ex rule_phase = 0, rule_offset = 0;
+};
+
+cut_reading read_cut(const msum_term& t, const line_cut& c, const line_reading& r, const part_a_form& a) {
+    cut_reading cut;
     for (int l : c.lines) {
-        const slot& s = c.in_a[slots[l][0].vertex] ? slots[l][0] : slots[l][1];
-        p.push_back(t.lines[l].projection);
-        j.push_back(angular[l]);
-        flipped_a.push_back((*flip)[s.vertex] ? -s.sign : s.sign);
-        if ((*rule)[s.vertex]) {
-            rule_phase += s.sign * t.lines[l].projection;
-            rule_offset += angular[l];
+        const slot& s = c.in_a[r.slots[l][0].vertex] ? r.slots[l][0] : r.slots[l][1];
+        cut.p.push_back(t.lines[l].projection);
+        cut.j.push_back(r.angular[l]);
+        cut.flipped_a.push_back(a.flip[s.vertex] ? -s.sign : s.sign);
+        if (a.rule[s.vertex]) {
+            cut.rule_phase += s.sign * t.lines[l].projection;
+            cut.rule_offset += r.angular[l];
         }
+    }
+    return cut;
+}
+
+// One side of the cut as it is being closed: its summand, phase exponent, summed lines (with
+// their angular momenta) and the renaming that joins its cut ends.
+struct side {
+    ex body = 1, exponent = 0;
+    std::vector<std::pair<symbol, ex>> lines;
+    exmap rename;
+};
+
+// The invariant of A is proportional to delta(j1, j2) (-1)^(j1 - m1') delta(m1' + m2', 0) with
+// m' the flipped A entries: q = s p on the joined line.  False where the two angular momenta
+// differ and neither is a name that the delta can identify with the other.
+bool close_on_two_lines(const cut_reading& cut, const separation_variant& variant, side& a, side& b,
+                        exmap& identify, separation& out) {
+    const auto& p = cut.p;
+    const auto& j = cut.j;
+    out.used = &two_line_cut_identity();
+    const int s = -cut.flipped_a[0] * cut.flipped_a[1];
+    ex metric = j[0] - cut.flipped_a[0] * p[0];
+    a.exponent += metric;
+    if (variant.closing_metric) b.exponent += metric;
+    a.rename[p[0]] = s * p[1];
+    b.rename[p[1]] = s * p[0];
+    a.lines.push_back({p[1], j[1]});
+    b.lines.push_back({p[0], j[0]});
+    ex kept = j[0], gone = j[1];
+    if (same_value(kept, gone)) {
+        out.factor = 1 / (2 * kept + 1);
+        return true;
+    }
+    if (!is_a<symbol>(gone)) std::swap(kept, gone);
+    if (!is_a<symbol>(gone)) return false;
+    identify[gone] = kept;
+    out.factor = kdelta(j[0], j[1]) / (2 * kept + 1);
+    return true;
+}
+
+// The invariant of A is a multiple of the 3j of the cut lines, and sum(m's : 3j^2) = 1 on its
+// triad: both sides are closed with that 3j, A's side on new projections.
+void close_on_three_lines(const cut_reading& cut, const std::vector<symbol>& fresh, side& a, side& b,
+                          separation& out) {
+    const auto& p = cut.p;
+    const auto& j = cut.j;
+    out.used = &three_line_cut_identity();
+    ex vertex = wigner3j(j[0], j[1], j[2], cut.flipped_a[0] * p[0], cut.flipped_a[1] * p[1], cut.flipped_a[2] * p[2]);
+    a.body *= vertex;
+    b.body *= vertex;
+    for (int k = 0; k < 3; ++k) {
+        a.rename[p[k]] = fresh[k];
+        a.lines.push_back({fresh[k], j[k]});
+        b.lines.push_back({p[k], j[k]});
+    }
+    out.factor = 1;
+}
+
+// Each part keeps c (m + j) of its lines (an integer where the line's 3j are nonzero); the rest
+// of the phase is free of every projection and goes in front, where the phase group finds the
+// triads of both parts, which it needs.
+void close_part(const side& part, const exmap& identify, ex& factor, ex& body_out, lst& indices) {
+    ex body = part.body.subs(part.rename).subs(identify);
+    ex x = part.exponent.subs(part.rename).subs(identify).expand();
+    ex own = 0;
+    for (const auto& [m, jm] : part.lines) {
+        own += x.coeff(m, 1) * (m + jm.subs(identify));
+        indices.append(m);
+    }
+    own = own.expand();
+    factor *= make_phase((x - own).expand());
+    body_out = body * make_phase(own);
+}
+
+}  // namespace
+
+std::optional<separation> separate(const msum_term& t, const line_cut& c, const std::vector<symbol>& fresh,
+                                   const separation_variant& variant) {
+    const std::size_t n = t.threejs.size(), size = c.lines.size();
+    if ((size != 2 && size != 3) || c.in_a.size() != n || (size == 3 && fresh.size() < 3)) return std::nullopt;
+    const ex exponent = t.exponent.expand();
+    auto lines = read_lines(t, exponent);
+    if (!lines) return std::nullopt;
+    std::vector<bool> is_cut(t.lines.size(), false);
+    for (int l : c.lines) is_cut[l] = true;
+    auto proper = make_part_a_proper(t, c, *lines, is_cut);
+    if (!proper) return std::nullopt;
+    const cut_reading cut = read_cut(t, c, *lines, *proper);
+
+    side a, b;
+    a.exponent = proper->lines_phase + proper->lines_offset - (cut.rule_phase + cut.rule_offset);
+    b.exponent = exponent - proper->lines_phase - proper->lines_offset +
+                 (variant.rule_phase ? cut.rule_phase + cut.rule_offset : 0);
+    b.body = t.rest;
+    for (std::size_t v = 0; v < n; ++v) (c.in_a[v] ? a.body : b.body) *= t.threejs[v];
+    for (std::size_t l = 0; l < t.lines.size(); ++l) {
+        if (is_cut[l]) continue;
+        (c.in_a[lines->slots[l][0].vertex] ? a.lines : b.lines).push_back({t.lines[l].projection, lines->angular[l]});
     }
 
     separation out;
-    ex exponent_a = a_lines_phase + a_lines_offset - (rule_phase + rule_offset);
-    ex exponent_b = exponent - a_lines_phase - a_lines_offset + (variant.rule_phase ? rule_phase + rule_offset : 0);
-    ex body_a = 1, body_b = t.rest;
-    for (std::size_t v = 0; v < n; ++v) (c.in_a[v] ? body_a : body_b) *= t.threejs[v];
-    // Each part's indices with the angular momentum of their lines.
-    std::vector<std::pair<symbol, ex>> lines_a, lines_b;
-    for (std::size_t l = 0; l < t.lines.size(); ++l) {
-        if (is_cut[l]) continue;
-        (c.in_a[slots[l][0].vertex] ? lines_a : lines_b).push_back({t.lines[l].projection, angular[l]});
-    }
-
-    exmap rename_a, rename_b, identify;
+    exmap identify;
     if (size == 2) {
-        out.used = &two_line_cut_identity();
-        // The invariant of A is proportional to delta(j1, j2) (-1)^(j1 - m1') delta(m1' + m2', 0)
-        // with m' the flipped A entries: q = s p on the joined line.
-        const int s = -flipped_a[0] * flipped_a[1];
-        ex metric = j[0] - flipped_a[0] * p[0];
-        exponent_a += metric;
-        if (variant.closing_metric) exponent_b += metric;
-        rename_a[p[0]] = s * p[1];
-        rename_b[p[1]] = s * p[0];
-        lines_a.push_back({p[1], j[1]});
-        lines_b.push_back({p[0], j[0]});
-        ex kept = j[0], gone = j[1];
-        if (!same_value(kept, gone)) {
-            if (!is_a<symbol>(gone)) std::swap(kept, gone);
-            if (!is_a<symbol>(gone)) return std::nullopt;
-            identify[gone] = kept;
-            out.factor = kdelta(j[0], j[1]) / (2 * kept + 1);
-        } else {
-            out.factor = 1 / (2 * kept + 1);
-        }
+        if (!close_on_two_lines(cut, variant, a, b, identify, out)) return std::nullopt;
     } else {
-        out.used = &three_line_cut_identity();
-        // The invariant of A is a multiple of this 3j, and sum(m's : 3j^2) = 1 on its triad.
-        ex vertex = wigner3j(j[0], j[1], j[2], flipped_a[0] * p[0], flipped_a[1] * p[1], flipped_a[2] * p[2]);
-        body_a *= vertex;
-        body_b *= vertex;
-        for (int k = 0; k < 3; ++k) {
-            rename_a[p[k]] = fresh[k];
-            lines_a.push_back({fresh[k], j[k]});
-            lines_b.push_back({p[k], j[k]});
-        }
-        out.factor = 1;
+        close_on_three_lines(cut, fresh, a, b, out);
     }
-    auto finish = [&](ex body, ex x, const exmap& rename, const std::vector<std::pair<symbol, ex>>& lines,
-                      ex& body_out, lst& indices) {
-        body = body.subs(rename).subs(identify);
-        x = x.subs(rename).subs(identify).expand();
-        // Each part keeps c (m + j) of its lines (an integer where the line's 3j are nonzero);
-        // the rest of the phase is free of every projection and goes in front, where the phase
-        // group finds the triads of both parts, which it needs.
-        ex own = 0;
-        for (const auto& [m, jm] : lines) {
-            own += x.coeff(m, 1) * (m + jm.subs(identify));
-            indices.append(m);
-        }
-        own = own.expand();
-        out.factor *= make_phase((x - own).expand());
-        body_out = body * make_phase(own);
-    };
-    finish(body_a, exponent_a, rename_a, lines_a, out.body_a, out.indices_a);
-    finish(body_b, exponent_b, rename_b, lines_b, out.body_b, out.indices_b);
+    close_part(a, identify, out.factor, out.body_a, out.indices_a);
+    close_part(b, identify, out.factor, out.body_b, out.indices_b);
     return out;
 }
 
