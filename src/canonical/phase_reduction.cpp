@@ -49,9 +49,22 @@ phase::linear_form linear_form_of(const ex& e) {
     return f;
 }
 
+void declare_in(phase::context& ctx, const quantum_number& q) {
+    if (q.role == qn_role::projection) {
+        // Projections take any sign, so they enter as unconstrained half-integers.
+        ctx.declare_angular(q.name, phase::parity::unknown);
+        const phase::linear_form v = phase::linear_form::variable(q.name);
+        if (q.parity == qn_parity::integer) ctx.add_integer(v);
+        if (q.parity == qn_parity::half_odd) ctx.add_integer(v + phase::linear_form(cln::cl_RA(1) / 2));
+        return;
+    }
+    ctx.declare_angular(q.name, q.parity == qn_parity::integer    ? phase::parity::integer
+                                : q.parity == qn_parity::half_odd ? phase::parity::half_odd
+                                                                   : phase::parity::unknown);
+}
+
 namespace {
 
-phase::linear_form to_form(const ex& e) { return linear_form_of(e); }
 
 // Names back to symbols: the program's, else the expression's own.  A summation index that a
 // stage made (x1, ...) is in no table, and a new symbol of the same name would not be bound by
@@ -155,36 +168,25 @@ private:
         });
         for (const quantum_number* qp : ordered) {
             const quantum_number& q = *qp;
-            phase::parity p = q.parity == qn_parity::integer    ? phase::parity::integer
-                              : q.parity == qn_parity::half_odd ? phase::parity::half_odd
-                                                                 : phase::parity::unknown;
-            if (q.role == qn_role::projection) {
-                ctx.declare_angular(q.name, phase::parity::unknown);
-                // Admissibility ties a projection to its angular momentum even after the symbol
-                // that paired them has been reduced away.
-                // Not for a name that is also a summation index: the table has one owner per
-                // name, and a bound index may belong to another j.
-                if (q.owner && !bound_names_.count(q.name)) {
-                    bool owner_present = true;
-                    for (const auto& n : names_in(*q.owner)) owner_present = owner_present && present.count(n);
-                    if (owner_present) owner_links.push_back(*q.owner - q.symbol);
-                }
-                if (q.parity == qn_parity::integer) ctx.add_integer(phase::linear_form::variable(q.name));
-                if (q.parity == qn_parity::half_odd)
-                    ctx.add_integer(phase::linear_form::variable(q.name) + phase::linear_form(cln::cl_RA(1) / 2));
-            } else {
-                ctx.declare_angular(q.name, p);
+            declare_in(ctx, q);
+            // Admissibility ties a projection to its angular momentum even after the symbol
+            // that paired them has been reduced away.  Not for a name that is also a summation
+            // index: the table has one owner per name, and a bound index may belong to another j.
+            if (q.role == qn_role::projection && q.owner && !bound_names_.count(q.name)) {
+                bool owner_present = true;
+                for (const auto& n : names_in(*q.owner)) owner_present = owner_present && present.count(n);
+                if (owner_present) owner_links.push_back(*q.owner - q.symbol);
             }
         }
-        for (const ex& link : owner_links) ctx.add_integer(to_form(link));
-        for (const auto& t : c.triads) ctx.add_triad(to_form(t[0]), to_form(t[1]), to_form(t[2]));
-        for (const auto& [j, m] : c.projections) ctx.add_integer(to_form(j - m));
-        for (const ex& z : c.zeros) ctx.add_zero(to_form(z));
+        for (const ex& link : owner_links) ctx.add_integer(linear_form_of(link));
+        for (const auto& t : c.triads) ctx.add_triad(linear_form_of(t[0]), linear_form_of(t[1]), linear_form_of(t[2]));
+        for (const auto& [j, m] : c.projections) ctx.add_integer(linear_form_of(j - m));
+        for (const ex& z : c.zeros) ctx.add_zero(linear_form_of(z));
         return ctx;
     }
 
     ex reduce(const ex& exponent, const phase::context& ctx) {
-        phase::linear_form x = to_form(exponent);
+        phase::linear_form x = linear_form_of(exponent);
         phase::integrality i = ctx.check_integer(x);
         if (!i.integer)
             throw phase_not_integer("the exponent of (-1)^(" + to_text(exponent) +

@@ -7,6 +7,7 @@
 #include <stdexcept>
 
 #include "model/quantum.hpp"
+#include "phase/context.hpp"
 #include "phase/linear_form.hpp"
 #include "limits/refusal.hpp"
 
@@ -30,5 +31,9 @@ GiNaC::ex phases_reduced_for_reading(const GiNaC::ex& e, const quantum_numbers& 
 
 // A linear GiNaC expression as the phase group's linear form; std::invalid_argument otherwise.
 phase::linear_form linear_form_of(const GiNaC::ex& e);
+
+// Declares q in the phase group by its role and declared parity: an angular momentum with its
+// parity, a projection as a half-integer of either sign (integral or half-odd as declared).
+void declare_in(phase::context& ctx, const quantum_number& q);
 
 }  // namespace couplet

@@ -90,7 +90,7 @@ std::optional<ex> engine::collapse_delta(const ex& term, const symbol& x, const 
         ex value = (-(d - c * x) / c).expand();
         phase::linear_form form;
         try {
-            form = form_of(value);
+            form = linear_form_of(value);
         } catch (const std::invalid_argument&) {
             continue;
         }

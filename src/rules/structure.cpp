@@ -6,6 +6,7 @@
 #include <set>
 #include <stdexcept>
 
+#include "model/structure.hpp"
 #include "model/symbols.hpp"
 
 namespace couplet::rules {
@@ -13,24 +14,9 @@ namespace couplet::rules {
 using namespace GiNaC;
 
 std::vector<triad> triads_of(const ex& f) {
-    std::vector<triad> out;
-    switch (kind_of(f)) {
-        case symbol_kind::threej: out.push_back({f.op(0), f.op(1), f.op(2)}); break;
-        case symbol_kind::clebsch_gordan: out.push_back({f.op(0), f.op(2), f.op(4)}); break;
-        case symbol_kind::sixj:  // {a b c; d e f}: (abc) (aef) (dbf) (dec)
-            out.push_back({f.op(0), f.op(1), f.op(2)});
-            out.push_back({f.op(0), f.op(4), f.op(5)});
-            out.push_back({f.op(3), f.op(1), f.op(5)});
-            out.push_back({f.op(3), f.op(4), f.op(2)});
-            break;
-        case symbol_kind::ninej:
-            for (int r = 0; r < 3; ++r) out.push_back({f.op(3 * r), f.op(3 * r + 1), f.op(3 * r + 2)});
-            for (int c = 0; c < 3; ++c) out.push_back({f.op(c), f.op(3 + c), f.op(6 + c)});
-            break;
-        case symbol_kind::triangle: out.push_back({f.op(0), f.op(1), f.op(2)}); break;
-        default: break;
-    }
-    return out;
+    coupling_structure c;
+    add_structure(f, c);
+    return c.triads;
 }
 
 std::vector<triad> all_triads(const ex& e) {
@@ -81,8 +67,6 @@ std::vector<symmetry::transformed> arrangements(const ex& s) {
     }
 }
 
-phase::linear_form form_of(const ex& e) { return linear_form_of(e); }
-
 phase::context context_for(const ex& term, const quantum_numbers& numbers, const std::optional<symbol>& loose) {
     phase::context ctx;
     std::set<std::string> present;
@@ -96,21 +80,11 @@ phase::context context_for(const ex& term, const quantum_numbers& numbers, const
             ctx.declare_angular(name, phase::parity::unknown);
             continue;
         }
-        phase::linear_form v = phase::linear_form::variable(name);
-        if (q->role == qn_role::projection) {
-            // Projections take any sign, so they enter as unconstrained half-integers.
-            ctx.declare_angular(name, phase::parity::unknown);
-            if (q->parity == qn_parity::integer) ctx.add_integer(v);
-            if (q->parity == qn_parity::half_odd) ctx.add_integer(v + phase::linear_form(cln::cl_RA(1) / 2));
-            continue;
-        }
-        ctx.declare_angular(name, q->parity == qn_parity::integer    ? phase::parity::integer
-                                  : q->parity == qn_parity::half_odd ? phase::parity::half_odd
-                                                                     : phase::parity::unknown);
+        declare_in(ctx, *q);
     }
     for (const triad& t : all_triads(term)) {
         try {
-            ctx.add_triad(form_of(t[0]), form_of(t[1]), form_of(t[2]));
+            ctx.add_triad(linear_form_of(t[0]), linear_form_of(t[1]), linear_form_of(t[2]));
         } catch (const std::invalid_argument&) {
             // A slot that is no linear form constrains nothing we can use.
         }
@@ -120,7 +94,7 @@ phase::context context_for(const ex& term, const quantum_numbers& numbers, const
 
 bool same_phase(const phase::context& ctx, const ex& x, const ex& y) {
     try {
-        return ctx.equal(form_of(x), form_of(y)) == phase::verdict::equal;
+        return ctx.equal(linear_form_of(x), linear_form_of(y)) == phase::verdict::equal;
     } catch (const std::invalid_argument&) {
         return false;
     }

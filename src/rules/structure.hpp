@@ -35,8 +35,6 @@ using couplet::terms_of;
 phase::context context_for(const GiNaC::ex& term, const quantum_numbers& numbers,
                            const std::optional<GiNaC::symbol>& loose = std::nullopt);
 
-// A linear form in the quantum numbers (throws std::invalid_argument when e is not linear).
-phase::linear_form form_of(const GiNaC::ex& e);
 
 // Whether (-1)^x == (-1)^y in the context; false also when either side is no linear form.
 bool same_phase(const phase::context& ctx, const GiNaC::ex& x, const GiNaC::ex& y);

@@ -9,6 +9,7 @@
 #include <string>
 #include <vector>
 
+#include "canonical/phase_reduction.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
@@ -53,8 +54,8 @@ inline bool same_phase_in(const GiNaC::ex& term, const GiNaC::ex& x, const GiNaC
     for (GiNaC::const_preorder_iterator it = term.preorder_begin(); it != term.preorder_end(); ++it)
         add_structure(*it, s);
     try {
-        for (const auto& [j, m] : s.projections) ctx.add_integer(rules::form_of(j) - rules::form_of(m));
-        for (const GiNaC::ex& z : s.zeros) ctx.add_zero(rules::form_of(z));
+        for (const auto& [j, m] : s.projections) ctx.add_integer(linear_form_of(j) - linear_form_of(m));
+        for (const GiNaC::ex& z : s.zeros) ctx.add_zero(linear_form_of(z));
     } catch (const std::invalid_argument&) {
         return false;
     }
