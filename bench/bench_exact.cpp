@@ -85,7 +85,8 @@ void random_sixj_against_gsl() {
         for (const auto& s : symbols) values.push_back(couplet::exact::sixj(s[0], s[1], s[2], s[3], s[4], s[5]));
         const auto start = clock_type::now();
         for (const auto& v : values) checksum_exact += v.to_double();
-        to_double_us = std::chrono::duration<double, std::micro>(clock_type::now() - start).count() / double(values.size());
+        to_double_us =
+            std::chrono::duration<double, std::micro>(clock_type::now() - start).count() / double(values.size());
     }
 
     std::printf("6j, %zu random admissible symbols with j <= 40 (seed %u, best of %d rounds, warm cache):\n",
@@ -102,8 +103,8 @@ void large_symbols() {
     double us = microseconds_per_call([&] { value = couplet::exact::sixj(400, 400, 400, 400, 400, 400); }, 1.0, 3);
     std::printf("6j{200,200,200;200,200,200}      %10.1f us/call (best)  = %s\n", us, value.to_decimal(20).c_str());
 
-    us = microseconds_per_call(
-        [&] { value = couplet::exact::ninej(200, 200, 200, 200, 200, 200, 200, 200, 200); }, 2.0, 3);
+    us = microseconds_per_call([&] { value = couplet::exact::ninej(200, 200, 200, 200, 200, 200, 200, 200, 200); }, 2.0,
+                               3);
     std::printf("9j with all j = 100               %10.1f us/call (best)  = %s\n", us, value.to_decimal(20).c_str());
 
     us = microseconds_per_call([&] { value = couplet::exact::threej(20000, 20000, 20000, 0, 0, 0); }, 1.0, 1);
@@ -114,8 +115,8 @@ void where_gsl_overflows() {
     gsl_sf_result result;
     const int status = gsl_sf_coupling_6j_e(86, 86, 86, 86, 86, 86, &result);
     const couplet::exact::number exact = couplet::exact::sixj(86, 86, 86, 86, 86, 86);
-    std::printf("6j with all j = 43: GSL status %d (%s), val %g, err %g\n", status, gsl_strerror(status),
-                result.val, result.err);
+    std::printf("6j with all j = 43: GSL status %d (%s), val %g, err %g\n", status, gsl_strerror(status), result.val,
+                result.err);
     std::printf("                    exact %s\n", exact.to_decimal(30).c_str());
     std::printf("                    = %s\n", exact.to_string().c_str());
 }

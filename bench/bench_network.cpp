@@ -4,22 +4,22 @@
 // result, how many cuts the network stage separated on, and whether an m-sum is left.
 // Prints a table; asserts nothing.
 // Usage: bench_network [RANDOM_PER_SIZE]   (default 3)
-#include <ctime>
 #include <cstdio>
 #include <cstdlib>
+#include <ctime>
 #include <string>
 
+#include "canonical/symmetries.hpp"
 #include "cli/fixed_layout.hpp"
-#include "parse/lower.hpp"
 #include "model/normalize.hpp"
 #include "model/result_shape.hpp"
 #include "network/cut.hpp"
-#include "network/reduce.hpp"
-#include "network/rewrites.hpp"
-#include "simplify/simplify.hpp"
-#include "canonical/symmetries.hpp"
 #include "network/network_corpus.hpp"
 #include "network/random_network.hpp"
+#include "network/reduce.hpp"
+#include "network/rewrites.hpp"
+#include "parse/lower.hpp"
+#include "simplify/simplify.hpp"
 
 using namespace couplet;
 
@@ -55,7 +55,8 @@ int main(int argc, char** argv) {
     const int per_size = argc > 1 ? std::atoi(argv[1]) : 3;
     std::printf("%-50s %9s %9s %9s %9s %4s %s\n", "case", "net ms", "all ms", "sums", "6j", "cuts", "m-sum left");
     std::printf("%-50s %9s %9s %9s %9s\n", "", "", "", "net/all", "net/all");
-    for (const auto& g : testing::network_corpus()) row(g.name, testing::graph_network_text(g.vertices, g.edges, g.open, 5));
+    for (const auto& g : testing::network_corpus())
+        row(g.name, testing::graph_network_text(g.vertices, g.edges, g.open, 5));
     std::mt19937 rng(2027);
     for (int n = 6; n <= 30; n += 4)
         for (int k = 0; k < per_size; ++k) {

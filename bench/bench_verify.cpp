@@ -46,10 +46,10 @@ void measure(const char* label, const std::string& identity) {
     double checking = seconds_since(start);
 
     std::printf("%s: %zu free quantum numbers, %zu points (%zu exhaustive%s, %zu outside, %zu random)\n", label,
-                domain.numbers.size(), samples.points.size(), samples.exhaustive,
-                samples.complete ? "" : " of more", samples.outside, samples.random);
-    std::printf("  sampling %.3f s; evaluating both sides %.3f s = %.0f points/s (%zu agree)\n", sampling,
-                evaluating, samples.points.size() / evaluating, agree);
+                domain.numbers.size(), samples.points.size(), samples.exhaustive, samples.complete ? "" : " of more",
+                samples.outside, samples.random);
+    std::printf("  sampling %.3f s; evaluating both sides %.3f s = %.0f points/s (%zu agree)\n", sampling, evaluating,
+                samples.points.size() / evaluating, agree);
     std::printf("  whole check %.3f s = %.0f points/s, verdict: %s\n", checking, report.points / checking,
                 verify::verdict_name(report.result));
 }

@@ -7,14 +7,14 @@
 // figures; asserts nothing.
 #include <algorithm>
 #include <chrono>
-#include <ctime>
 #include <cstdio>
 #include <cstdlib>
+#include <ctime>
 #include <string>
 #include <vector>
 
-#include "parse/lower.hpp"
 #include "network/acceptance_inputs.hpp"
+#include "parse/lower.hpp"
 #include "simplify/simplify.hpp"
 #include "verify/simplification_check.hpp"
 
@@ -52,16 +52,19 @@ int main(int argc, char** argv) {
         GiNaC::ex result = simplify_expression(input, program.numbers);  // warm-up
         double simplifying = best_seconds(runs, [&] { result = simplify_expression(input, program.numbers); });
         verify::simplification_check check = verify::verify_simplification(input, result, program.numbers, {});
-        double verifying = best_seconds(
-            runs, [&] { check = verify::verify_simplification(input, result, program.numbers, {}); });
+        double verifying =
+            best_seconds(runs, [&] { check = verify::verify_simplification(input, result, program.numbers, {}); });
         // What `couplet simplify` does at default settings: the time-matched budget.
         verify::simplification_check budgeted;
-        double by_default = best_seconds(runs, [&] {
-            auto t0 = std::chrono::steady_clock::now();
-            GiNaC::ex r = simplify_expression(input, program.numbers);
-            auto budget = verify::matching_budget(std::chrono::steady_clock::now() - t0);
-            budgeted = verify::verify_simplification(input, r, program.numbers, {}, {}, budget);
-        }) - simplifying;
+        double by_default =
+            best_seconds(runs,
+                         [&] {
+                             auto t0 = std::chrono::steady_clock::now();
+                             GiNaC::ex r = simplify_expression(input, program.numbers);
+                             auto budget = verify::matching_budget(std::chrono::steady_clock::now() - t0);
+                             budgeted = verify::verify_simplification(input, r, program.numbers, {}, {}, budget);
+                         }) -
+            simplifying;
         double ratio = verifying / simplifying, ratio_default = by_default / simplifying;
         total_simplify += simplifying;
         total_verify += verifying;
@@ -69,8 +72,8 @@ int main(int argc, char** argv) {
         worst = std::max(worst, ratio);
         worst_default = std::max(worst_default, ratio_default);
         std::printf("%-26s %8.1fms %8.1fms %7.2f %7zu %6s | %8.1fms %7.2f %7zu\n", c.label, 1e3 * simplifying,
-                    1e3 * verifying, ratio, check.points, check.agrees ? "yes" : "NO", 1e3 * by_default,
-                    ratio_default, budgeted.points);
+                    1e3 * verifying, ratio, check.points, check.agrees ? "yes" : "NO", 1e3 * by_default, ratio_default,
+                    budgeted.points);
     }
     std::printf("every point: simplify %.1f ms, verify %.1f ms, ratio %.2f (worst single input %.2f)\n",
                 1e3 * total_simplify, 1e3 * total_verify, total_verify / total_simplify, worst);

@@ -9,11 +9,11 @@
 #include <iostream>
 #include <string>
 
-#include "print/print.hpp"
 #include "model/result_shape.hpp"
-#include "simplify/simplify.hpp"
+#include "print/print.hpp"
 #include "rules/jsum_check.hpp"
 #include "rules/random_jsum.hpp"
+#include "simplify/simplify.hpp"
 
 using namespace couplet;
 
@@ -55,9 +55,9 @@ int main(int argc, char** argv) {
     }
     double total_s = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     std::cout << "inputs " << inputs << "\nmismatches " << mismatches << "\nerrors " << errors << "\nrefused "
-              << refused << "\nclosed (no sum left) " << closed << "\nleft as a sum " << left_summed << "\nmore terms than the input's own form " << longer
-              << "\npoints compared " << compared << "\nslowest simplify " << slowest_ms << " ms\ntotal " << total_s
-              << " s\n";
+              << refused << "\nclosed (no sum left) " << closed << "\nleft as a sum " << left_summed
+              << "\nmore terms than the input's own form " << longer << "\npoints compared " << compared
+              << "\nslowest simplify " << slowest_ms << " ms\ntotal " << total_s << " s\n";
     if (!slowest.empty()) std::cout << "slowest input: " << slowest << "\n";
     return mismatches == 0 && errors == 0 ? 0 : 1;
 }

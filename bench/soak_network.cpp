@@ -7,11 +7,11 @@
 #include <iostream>
 #include <string>
 
-#include "parse/lower.hpp"
 #include "model/result_shape.hpp"
-#include "simplify/simplify.hpp"
 #include "network/network_points.hpp"
 #include "network/random_network.hpp"
+#include "parse/lower.hpp"
+#include "simplify/simplify.hpp"
 
 using namespace couplet;
 
@@ -19,7 +19,8 @@ int main(int argc, char** argv) {
     const int count = argc > 1 ? std::atoi(argv[1]) : 10000;
     const unsigned seed = argc > 2 ? static_cast<unsigned>(std::atoi(argv[2])) : 7;
     std::mt19937 rng(seed);
-    int inputs = 0, longer = 0, mismatches = 0, unreduced = 0, partly = 0, closed = 0, failures = 0, points = 0, nonzero = 0;
+    int inputs = 0, longer = 0, mismatches = 0, unreduced = 0, partly = 0, closed = 0, failures = 0, points = 0,
+        nonzero = 0;
     double slowest_ms = 0, simplify_ms = 0, check_ms = 0;
     std::string slowest;
     auto start = std::chrono::steady_clock::now();
@@ -54,8 +55,9 @@ int main(int argc, char** argv) {
     double total_s = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     std::cout << "inputs " << inputs << "\nmismatches " << mismatches << "\nerrors " << failures
               << "\nunreduced (no m-sum removed) " << unreduced << "\npartly reduced " << partly
-              << "\nclosed (no m-sum left) " << closed << "\nmore terms than the input's own form " << longer << "\npoints checked " << points << " (" << nonzero
-              << " nonzero)\nslowest simplify " << slowest_ms << " ms\ntime in simplify " << simplify_ms / 1000 << " s, in the exact check " << check_ms / 1000
+              << "\nclosed (no m-sum left) " << closed << "\nmore terms than the input's own form " << longer
+              << "\npoints checked " << points << " (" << nonzero << " nonzero)\nslowest simplify " << slowest_ms
+              << " ms\ntime in simplify " << simplify_ms / 1000 << " s, in the exact check " << check_ms / 1000
               << " s, total " << total_s << " s\n";
     if (!slowest.empty()) std::cout << "slowest input: " << slowest << "\n";
     return mismatches == 0 && failures == 0 ? 0 : 1;

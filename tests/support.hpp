@@ -25,9 +25,7 @@ inline cli_result run_cli(std::vector<std::string> args, const std::string& inpu
     return {code, out.str(), err.str()};
 }
 
-inline lowered_program lower_text(const std::string& text) {
-    return read_program(source_file("<test>", text));
-}
+inline lowered_program lower_text(const std::string& text) { return read_program(source_file("<test>", text)); }
 
 // The expression of the last statement of `text`.
 inline GiNaC::ex lower_last(const std::string& text) { return lower_text(text).statements.back().value; }

@@ -16,8 +16,7 @@ int main() {
             o);
         std::cout << "answer:  " << couplet::to_text(r.answer) << "\n";
         std::cout << "latex:   " << couplet::to_latex(r) << "\n";
-        std::cout << "checked: " << (r.checked.verified ? "yes" : "no") << ", at " << r.checked.points
-                  << " points\n";
+        std::cout << "checked: " << (r.checked.verified ? "yes" : "no") << ", at " << r.checked.points << " points\n";
         for (const couplet::step& s : *r.steps) std::cout << "step:    " << s.rule << " (" << s.reference << ")\n";
         return r.checked.verified ? 0 : 1;
     } catch (const couplet::input_error& e) {

@@ -26,15 +26,15 @@ namespace couplet {
 
 // How statements are carried out.  The defaults are the command line's.
 struct options {
-    int depth = 2;         // check exactly at every admissible point with all free j <= depth
-    int samples = 200;     // and at this many random points with larger j
-    bool verify = true;    // simplify checks its answer against the input before returning it
+    int depth = 2;       // check exactly at every admissible point with all free j <= depth
+    int samples = 200;   // and at this many random points with larger j
+    bool verify = true;  // simplify checks its answer against the input before returning it
     // At default sampling, simplify's check takes about as long as the simplification did;
     // false checks every sampled point.
     bool budgeted_verification = true;
-    bool prefer_clebsch = false;  // answers with Clebsch-Gordan coefficients instead of 3j
-    bool as_written = false;      // a 6j or 9j of the input keeps the input's arrangement
-    bool steps = false;           // record the derivation (identities applied, before and after)
+    bool prefer_clebsch = false;     // answers with Clebsch-Gordan coefficients instead of 3j
+    bool as_written = false;         // a 6j or 9j of the input keeps the input's arrangement
+    bool steps = false;              // record the derivation (identities applied, before and after)
     std::size_t max_terms = 100000;  // refuse expansions above this many terms
     double time_limit_seconds = 0;   // wall clock for a whole run(); 0: none
     // Called during long verifications with (points done, points in all).
@@ -61,12 +61,12 @@ enum class statement_kind { simplify, check, eval, definition, declaration };
 // One statement of the input, as read.
 struct statement {
     statement_kind kind = statement_kind::simplify;
-    std::string text;             // its source text
-    std::string name;             // a definition's name (`let NAME = ...`)
-    GiNaC::ex value;              // the expression; a check's left side
-    GiNaC::ex rhs;                // a check's right side
+    std::string text;                                        // its source text
+    std::string name;                                        // a definition's name (`let NAME = ...`)
+    GiNaC::ex value;                                         // the expression; a check's left side
+    GiNaC::ex rhs;                                           // a check's right side
     std::vector<std::pair<std::string, GiNaC::numeric>> at;  // eval ... at NAME=VALUE
-    std::size_t offset = 0, end = 0;  // where it starts and ends in the input (bytes)
+    std::size_t offset = 0, end = 0;                         // where it starts and ends in the input (bytes)
 };
 
 // One identity applied in a simplification, with the term it changed.
@@ -99,16 +99,16 @@ struct counterexample {
 // What `check` decided, and why.
 struct check_record {
     verdict result = verdict::holds;
-    std::string summary;                     // one line: "holds: ...", "fails by a phase: ..."
+    std::string summary;  // one line: "holds: ...", "fails by a phase: ..."
     bool proved_symbolically = false;
     std::size_t points = 0, nonzero_points = 0;
-    bool exhaustive = true;                  // every admissible point with j <= depth was checked
+    bool exhaustive = true;  // every admissible point with j <= depth was checked
     int depth = 2;
-    std::optional<GiNaC::ex> missing_phase;  // exponent E: the right side lacks (-1)^E
-    std::optional<GiNaC::ex> missing_factor; // the whole factor the right side lacks
-    std::optional<counterexample> counter;   // the smallest point where the sides differ
+    std::optional<GiNaC::ex> missing_phase;   // exponent E: the right side lacks (-1)^E
+    std::optional<GiNaC::ex> missing_factor;  // the whole factor the right side lacks
+    std::optional<counterexample> counter;    // the smallest point where the sides differ
     std::string note;
-    bool stopped = false;                    // the time limit ended the comparison early
+    bool stopped = false;  // the time limit ended the comparison early
 };
 
 // The outcome of one statement.
@@ -116,11 +116,11 @@ struct result {
     statement source;
     statement_kind done = statement_kind::simplify;  // what was carried out (a bare statement
                                                      // is simplified or evaluated)
-    GiNaC::ex answer;                    // simplify: the answer (the input where its check failed)
-    std::optional<exact_value> value;    // eval
-    std::optional<check_record> check;   // check
-    std::optional<std::vector<step>> steps;  // simplify with options.steps: the derivation
-    verification checked;                // simplify
+    GiNaC::ex answer;                                // simplify: the answer (the input where its check failed)
+    std::optional<exact_value> value;                // eval
+    std::optional<check_record> check;               // check
+    std::optional<std::vector<step>> steps;          // simplify with options.steps: the derivation
+    verification checked;                            // simplify
     // couplet caught itself in an error (a simplification that changed the value, two sides
     // reduced to 0 that evaluate differently): `diagnostic` says what; please report it.
     bool internal_failure = false;

@@ -20,11 +20,16 @@ std::string line_of(const json& record) { return record.dump(-1, ' ', false, jso
 
 const char* verdict_text(verdict v) {
     switch (v) {
-        case verdict::holds: return verify::verdict_name(verify::verdict::holds);
-        case verdict::fails_by_phase: return verify::verdict_name(verify::verdict::fails_by_phase);
-        case verdict::fails_by_factor: return verify::verdict_name(verify::verdict::fails_by_factor);
-        case verdict::undecided: return verify::verdict_name(verify::verdict::undecided);
-        default: return verify::verdict_name(verify::verdict::fails);
+        case verdict::holds:
+            return verify::verdict_name(verify::verdict::holds);
+        case verdict::fails_by_phase:
+            return verify::verdict_name(verify::verdict::fails_by_phase);
+        case verdict::fails_by_factor:
+            return verify::verdict_name(verify::verdict::fails_by_factor);
+        case verdict::undecided:
+            return verify::verdict_name(verify::verdict::undecided);
+        default:
+            return verify::verdict_name(verify::verdict::fails);
     }
 }
 
@@ -85,7 +90,8 @@ json simplify_json(const result& r) {
 
 std::string to_json(const result& r) {
     switch (r.done) {
-        case statement_kind::simplify: return line_of(simplify_json(r));
+        case statement_kind::simplify:
+            return line_of(simplify_json(r));
         case statement_kind::eval:
             return line_of({{"kind", "eval"},
                             {"input", r.source.text},
@@ -106,7 +112,8 @@ std::string to_json(const result& r) {
         }
         case statement_kind::definition:
             return line_of({{"kind", "definition"}, {"input", r.source.text}, {"name", r.source.name}});
-        default: return line_of({{"kind", "declaration"}, {"input", r.source.text}});
+        default:
+            return line_of({{"kind", "declaration"}, {"input", r.source.text}});
     }
 }
 

@@ -31,8 +31,7 @@ std::string point_latex(const std::vector<std::pair<std::string, GiNaC::numeric>
 }  // namespace
 
 void latex_document::begin() {
-    if (document_)
-        out_ << "\\documentclass{article}\n\\usepackage{amsmath}\n\\allowdisplaybreaks\n\\begin{document}\n";
+    if (document_) out_ << "\\documentclass{article}\n\\usepackage{amsmath}\n\\allowdisplaybreaks\n\\begin{document}\n";
 }
 
 void latex_document::end(const source_file& src) {
@@ -103,10 +102,14 @@ void latex_document::statement(const source_file& src, const result& r) {
             names_.emplace_back(s.value, GiNaC::symbol(s.name));
             return;
         }
-        case statement_kind::simplify: return simplification(r);
-        case statement_kind::eval: return evaluation(r);
-        case statement_kind::check: return check(r);
-        default: return;
+        case statement_kind::simplify:
+            return simplification(r);
+        case statement_kind::eval:
+            return evaluation(r);
+        case statement_kind::check:
+            return check(r);
+        default:
+            return;
     }
 }
 
@@ -180,9 +183,9 @@ void latex_document::check(const result& res) {
         case verdict::holds:
             f.relations = {"="};
             f.notes = {"\\quad" + words(r.points == 0 ? "(holds vacuously: no admissible point)"
-                                      : r.proved_symbolically
-                                          ? "(proved; checked exactly at " + points.str() + " points)"
-                                          : "(verified exactly at " + points.str() + " points)")};
+                                        : r.proved_symbolically
+                                            ? "(proved; checked exactly at " + points.str() + " points)"
+                                            : "(verified exactly at " + points.str() + " points)")};
             break;
         case verdict::undecided:
             f.relations = {"\\overset{?}{=}"};
@@ -202,8 +205,8 @@ void latex_document::check(const result& res) {
             f.relations = {"\\neq"};
             if (r.counter)
                 f.notes = {"\\quad" + words("at ") + point_latex(r.counter->at),
-                           "\\quad" + words("the left side is ") + r.counter->lhs.latex +
-                               words(", the right side ") + r.counter->rhs.latex};
+                           "\\quad" + words("the left side is ") + r.counter->lhs.latex + words(", the right side ") +
+                               r.counter->rhs.latex};
             break;
     }
     display(f);

@@ -42,8 +42,8 @@ private:
 
     bool document_;
     std::ostream& out_;
-    std::size_t read_up_to_ = 0;                            // source offset consumed by comments
-    std::vector<std::pair<GiNaC::ex, GiNaC::ex>> names_;   // (value, symbol) of each `let`
+    std::size_t read_up_to_ = 0;                          // source offset consumed by comments
+    std::vector<std::pair<GiNaC::ex, GiNaC::ex>> names_;  // (value, symbol) of each `let`
     bool triangle_explained_ = false;
 };
 

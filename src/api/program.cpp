@@ -6,11 +6,16 @@ namespace {
 
 statement_kind public_kind(request_kind k) {
     switch (k) {
-        case request_kind::declaration: return statement_kind::declaration;
-        case request_kind::definition: return statement_kind::definition;
-        case request_kind::check: return statement_kind::check;
-        case request_kind::eval: return statement_kind::eval;
-        default: return statement_kind::simplify;
+        case request_kind::declaration:
+            return statement_kind::declaration;
+        case request_kind::definition:
+            return statement_kind::definition;
+        case request_kind::check:
+            return statement_kind::check;
+        case request_kind::eval:
+            return statement_kind::eval;
+        default:
+            return statement_kind::simplify;
     }
 }
 

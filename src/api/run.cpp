@@ -30,9 +30,9 @@ run_limits limits_of(const options& o) {
     run_limits limits;
     limits.max_terms = o.max_terms;
     if (o.time_limit_seconds > 0)
-        limits.deadline = std::chrono::steady_clock::now() +
-                          std::chrono::duration_cast<std::chrono::steady_clock::duration>(
-                              std::chrono::duration<double>(o.time_limit_seconds));
+        limits.deadline =
+            std::chrono::steady_clock::now() + std::chrono::duration_cast<std::chrono::steady_clock::duration>(
+                                                   std::chrono::duration<double>(o.time_limit_seconds));
     return limits;
 }
 

@@ -45,7 +45,8 @@ exact_value value_of(const exact::number& n) {
 // The answer, and the derivation when the built-in simplifier made it.
 simplification run_simplifier(const statement_context& c) {
     const ex& e = c.s.value;
-    simplification done = c.simplifier ? simplification{c.simplifier(e, c.numbers), {}} : simplify_with_steps(e, c.numbers);
+    simplification done =
+        c.simplifier ? simplification{c.simplifier(e, c.numbers), {}} : simplify_with_steps(e, c.numbers);
     ex& result = done.answer;
     // The CG form is applied before verification, so that what is printed is what was checked.
     if (c.o.prefer_clebsch)
@@ -98,12 +99,11 @@ result simplify(const statement_context& c) {
         r.checked.points_sampled = v.sampled;
         return r;
     }
-    r.checked.disagreement =
-        !v.result_error.empty()
-            ? "the result cannot be evaluated" + (v.counter ? " at " + verify::describe(*v.counter) : "") + ": " +
-                  v.result_error
-            : "at " + verify::describe(*v.counter) + " the input is " + v.counter->lhs.to_string() +
-                  " but the result is " + v.counter->rhs.to_string();
+    r.checked.disagreement = !v.result_error.empty()
+                                 ? "the result cannot be evaluated" +
+                                       (v.counter ? " at " + verify::describe(*v.counter) : "") + ": " + v.result_error
+                                 : "at " + verify::describe(*v.counter) + " the input is " +
+                                       v.counter->lhs.to_string() + " but the result is " + v.counter->rhs.to_string();
     r.internal_failure = true;
     r.diagnostic = "couplet: internal check failed: simplifying '" + c.s.text + "' gave " + to_text(r.answer) +
                    ", which differs from the input: " + r.checked.disagreement +
@@ -128,11 +128,16 @@ result evaluate(const statement_context& c) {
 
 verdict public_verdict(verify::verdict v) {
     switch (v) {
-        case verify::verdict::holds: return verdict::holds;
-        case verify::verdict::fails_by_phase: return verdict::fails_by_phase;
-        case verify::verdict::fails_by_factor: return verdict::fails_by_factor;
-        case verify::verdict::undecided: return verdict::undecided;
-        default: return verdict::fails;
+        case verify::verdict::holds:
+            return verdict::holds;
+        case verify::verdict::fails_by_phase:
+            return verdict::fails_by_phase;
+        case verify::verdict::fails_by_factor:
+            return verdict::fails_by_factor;
+        case verify::verdict::undecided:
+            return verdict::undecided;
+        default:
+            return verdict::fails;
     }
 }
 
@@ -204,9 +209,14 @@ result execute_statement(const program::parts& p, std::size_t k, const options& 
         case request_kind::simplify:
             r = s.bare && bare == bare_meaning::eval ? evaluate(c) : simplify(c);
             break;
-        case request_kind::eval: r = evaluate(c); break;
-        case request_kind::check: r = check(c); break;
-        default: r.done = p.statements.at(k).kind;
+        case request_kind::eval:
+            r = evaluate(c);
+            break;
+        case request_kind::check:
+            r = check(c);
+            break;
+        default:
+            r.done = p.statements.at(k).kind;
     }
     r.source = p.statements.at(k);
     return r;

@@ -20,7 +20,8 @@ std::string derivation_comments(const std::vector<step>& steps) {
 
 std::string to_text(const result& r) {
     switch (r.done) {
-        case statement_kind::eval: return r.value->exact + "  ~ " + r.value->decimal;
+        case statement_kind::eval:
+            return r.value->exact + "  ~ " + r.value->decimal;
         case statement_kind::check:
             return r.check ? r.check->summary : "internal check failed (see the message on standard error)";
         case statement_kind::simplify: {
@@ -29,22 +30,26 @@ std::string to_text(const result& r) {
             if (!out.empty() && out.back() == '\n') out.pop_back();
             return out;
         }
-        default: return "";
+        default:
+            return "";
     }
 }
 
 std::string to_latex(const result& r) {
     switch (r.done) {
-        case statement_kind::eval: return r.value->latex;
+        case statement_kind::eval:
+            return r.value->latex;
         case statement_kind::check: {
-            const char* relation = !r.check                                   ? " = "
-                                   : r.check->result == verdict::holds       ? " = "
-                                   : r.check->result == verdict::undecided   ? " \\overset{?}{=} "
-                                                                             : " \\neq ";
+            const char* relation = !r.check                                ? " = "
+                                   : r.check->result == verdict::holds     ? " = "
+                                   : r.check->result == verdict::undecided ? " \\overset{?}{=} "
+                                                                           : " \\neq ";
             return to_latex(r.source.value) + relation + to_latex(r.source.rhs);
         }
-        case statement_kind::simplify: return to_latex(r.answer);
-        default: return "";
+        case statement_kind::simplify:
+            return to_latex(r.answer);
+        default:
+            return "";
     }
 }
 

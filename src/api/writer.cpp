@@ -13,8 +13,7 @@ struct writer::state {
 };
 
 writer::writer(output_format format, std::ostream& out)
-    : state_(new state{format, out,
-                       latex_document(format == output_format::latex_document, out)}) {}
+    : state_(new state{format, out, latex_document(format == output_format::latex_document, out)}) {}
 
 writer::~writer() = default;
 

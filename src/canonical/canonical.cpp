@@ -1,10 +1,10 @@
 // Choosing one representative per symmetry class, and the pass that applies it.
 #include <algorithm>
 
+#include "canonical/entry_order.hpp"
+#include "canonical/symmetries.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "canonical/symmetries.hpp"
-#include "canonical/entry_order.hpp"
 
 namespace couplet::symmetry {
 
@@ -31,8 +31,8 @@ transformed pick(const std::vector<transformed>& orbit, std::size_t projection_s
     for (const transformed& t : orbit) {
         if (!is_a<function>(t.symbol)) return {0, 0};  // a selection rule made it vanish
         auto key = key_of(t.symbol, projection_start, order);
-        bool better = !best || less(key, best_key) ||
-                      (!less(best_key, key) && phase_weight(t.phase) < phase_weight(best->phase));
+        bool better =
+            !best || less(key, best_key) || (!less(best_key, key) && phase_weight(t.phase) < phase_weight(best->phase));
         if (better) {
             best = &t;
             best_key = std::move(key);
@@ -66,10 +66,14 @@ struct canonicalizer : map_function {
 transformed canonical(const ex& s, const quantum_numbers& numbers) {
     entry_order order(numbers);
     switch (kind_of(s)) {
-        case symbol_kind::threej: return pick(threej_orbit(s), 3, order);
-        case symbol_kind::sixj: return pick(sixj_orbit(s), 6, order);
-        case symbol_kind::ninej: return pick(ninej_orbit(s), 9, order);
-        default: return {s, 0};
+        case symbol_kind::threej:
+            return pick(threej_orbit(s), 3, order);
+        case symbol_kind::sixj:
+            return pick(sixj_orbit(s), 6, order);
+        case symbol_kind::ninej:
+            return pick(ninej_orbit(s), 9, order);
+        default:
+            return {s, 0};
     }
 }
 

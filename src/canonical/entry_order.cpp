@@ -1,7 +1,7 @@
 #include "canonical/entry_order.hpp"
 
-#include "print/print.hpp"
 #include "model/readable_order.hpp"
+#include "print/print.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -48,8 +48,8 @@ entry_order::key entry_order::of(const ex& entry, bool projection_row) const {
         take(x);
     std::sort(terms.begin(), terms.end(), [](const auto& a, const auto& b) { return a.first < b.first; });
     // A projection row prefers m to -m: compare a negative entry by its magnitude, after.
-    bool negative_lead = projection_row && (terms.empty() ? constant.is_negative()
-                                                            : terms.front().second.is_negative());
+    bool negative_lead =
+        projection_row && (terms.empty() ? constant.is_negative() : terms.front().second.is_negative());
     numeric sign = negative_lead ? -1 : 1;
     key k{{negative_lead ? 1 : 0, numeric(0)}};
     for (const auto& [r, c] : terms) k.emplace_back(r, c * sign);

@@ -30,7 +30,6 @@ private:
     std::map<std::string, long> rank_;
 };
 
-
 bool key_less(const entry_order::key& a, const entry_order::key& b);
 
 }  // namespace couplet::symmetry

@@ -1,7 +1,7 @@
 // The generating symmetries as named transformations, each with its reference; the tests
 // check every one by exact evaluation at random admissible points.
-#include "model/symbols.hpp"
 #include "canonical/symmetries.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::symmetry {
 
@@ -11,9 +11,7 @@ namespace {
 
 ex threej_sum(const ex& s) { return s.op(0) + s.op(1) + s.op(2); }
 
-transformed threej_cyclic(const ex& s) {
-    return {wigner3j(s.op(1), s.op(2), s.op(0), s.op(4), s.op(5), s.op(3)), 0};
-}
+transformed threej_cyclic(const ex& s) { return {wigner3j(s.op(1), s.op(2), s.op(0), s.op(4), s.op(5), s.op(3)), 0}; }
 transformed threej_swap_first_two(const ex& s) {
     return {wigner3j(s.op(1), s.op(0), s.op(2), s.op(4), s.op(3), s.op(5)), threej_sum(s)};
 }
@@ -25,9 +23,8 @@ transformed threej_reverse_projections(const ex& s) {
 // m = (row3-row2)/2.  From memory; the tests confirm it exactly.
 transformed threej_regge(const ex& s) {
     const ex &j1 = s.op(0), &j2 = s.op(1), &j3 = s.op(2), &m1 = s.op(3), &m2 = s.op(4), &m3 = s.op(5);
-    ex r[3][3] = {{-j1 + j2 + j3, j1 - j2 + j3, j1 + j2 - j3},
-                  {j1 - m1, j2 - m2, j3 - m3},
-                  {j1 + m1, j2 + m2, j3 + m3}};
+    ex r[3][3] = {
+        {-j1 + j2 + j3, j1 - j2 + j3, j1 + j2 - j3}, {j1 - m1, j2 - m2, j3 - m3}, {j1 + m1, j2 + m2, j3 + m3}};
     // Transposed square: row k of the old square becomes column k.
     exvector j(3), m(3);
     for (int k = 0; k < 3; ++k) {
@@ -50,8 +47,8 @@ transformed sixj_exchange_rows_in_two_columns(const ex& s) {
 // confirm it exactly.
 transformed sixj_regge(const ex& x) {
     ex s = (x.op(1) + x.op(2) + x.op(4) + x.op(5)) / 2;
-    return {wigner6j(x.op(0), (s - x.op(1)).expand(), (s - x.op(2)).expand(), x.op(3),
-                     (s - x.op(4)).expand(), (s - x.op(5)).expand()),
+    return {wigner6j(x.op(0), (s - x.op(1)).expand(), (s - x.op(2)).expand(), x.op(3), (s - x.op(4)).expand(),
+                     (s - x.op(5)).expand()),
             0};
 }
 
@@ -67,12 +64,10 @@ transformed ninej_row_cycle(const ex& s) {
     return {wigner9j(s.op(3), s.op(4), s.op(5), s.op(6), s.op(7), s.op(8), s.op(0), s.op(1), s.op(2)), 0};
 }
 transformed ninej_row_swap(const ex& s) {
-    return {wigner9j(s.op(3), s.op(4), s.op(5), s.op(0), s.op(1), s.op(2), s.op(6), s.op(7), s.op(8)),
-            ninej_sum(s)};
+    return {wigner9j(s.op(3), s.op(4), s.op(5), s.op(0), s.op(1), s.op(2), s.op(6), s.op(7), s.op(8)), ninej_sum(s)};
 }
 transformed ninej_column_swap(const ex& s) {
-    return {wigner9j(s.op(1), s.op(0), s.op(2), s.op(4), s.op(3), s.op(5), s.op(7), s.op(6), s.op(8)),
-            ninej_sum(s)};
+    return {wigner9j(s.op(1), s.op(0), s.op(2), s.op(4), s.op(3), s.op(5), s.op(7), s.op(6), s.op(8)), ninej_sum(s)};
 }
 
 }  // namespace
@@ -91,8 +86,7 @@ const std::vector<named_symmetry>& sixj_symmetries() {
     static const std::vector<named_symmetry> s{
         {"6j cyclic permutation of the columns", "DLMF 34.5.8", sixj_column_cycle},
         {"6j exchange of two columns", "DLMF 34.5.8", sixj_column_swap},
-        {"6j exchange of upper and lower entries in two columns", "DLMF 34.5.8",
-         sixj_exchange_rows_in_two_columns},
+        {"6j exchange of upper and lower entries in two columns", "DLMF 34.5.8", sixj_exchange_rows_in_two_columns},
         {"6j Regge symmetry", "DLMF 34.5.9", sixj_regge},
     };
     return s;

@@ -2,8 +2,8 @@
 #include <algorithm>
 #include <array>
 
-#include "model/symbols.hpp"
 #include "canonical/symmetries.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::symmetry {
 
@@ -13,8 +13,8 @@ namespace {
 
 // The six permutations of three columns with their parity (1 = odd).
 const std::array<std::pair<std::array<int, 3>, int>, 6>& permutations3() {
-    static const std::array<std::pair<std::array<int, 3>, int>, 6> p{{
-        {{0, 1, 2}, 0}, {{1, 2, 0}, 0}, {{2, 0, 1}, 0}, {{1, 0, 2}, 1}, {{0, 2, 1}, 1}, {{2, 1, 0}, 1}}};
+    static const std::array<std::pair<std::array<int, 3>, int>, 6> p{
+        {{{0, 1, 2}, 0}, {{1, 2, 0}, 0}, {{2, 0, 1}, 0}, {{1, 0, 2}, 1}, {{0, 2, 1}, 1}, {{2, 1, 0}, 1}}};
     return p;
 }
 
@@ -31,8 +31,7 @@ std::vector<transformed> threej_orbit(const ex& s) {
                 a[k] = s.op(perm[k]);
                 a[3 + k] = flip ? ex(-s.op(3 + perm[k])) : s.op(3 + perm[k]);
             }
-            out.push_back({wigner3j(a[0], a[1], a[2], a[3], a[4], a[5]),
-                           ((odd + flip) % 2) ? jsum : ex(0)});
+            out.push_back({wigner3j(a[0], a[1], a[2], a[3], a[4], a[5]), ((odd + flip) % 2) ? jsum : ex(0)});
         }
     }
     return out;
@@ -41,8 +40,8 @@ std::vector<transformed> threej_orbit(const ex& s) {
 std::vector<transformed> sixj_orbit(const ex& s) {
     // Any column permutation, and exchanging upper and lower entries in two columns: the 24
     // tetrahedral symmetries, all without phase   (DLMF 34.5.8).
-    static const std::array<std::array<bool, 3>, 4> swaps{{{false, false, false}, {true, true, false},
-                                                            {true, false, true}, {false, true, true}}};
+    static const std::array<std::array<bool, 3>, 4> swaps{
+        {{false, false, false}, {true, true, false}, {true, false, true}, {false, true, true}}};
     std::vector<transformed> out;
     for (const auto& sw : swaps) {
         for (const auto& [perm, odd] : permutations3()) {

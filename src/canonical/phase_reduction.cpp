@@ -6,14 +6,14 @@
 #include <set>
 #include <sstream>
 
-#include "model/rewrite.hpp"
+#include <algorithm>
 #include "model/normalize.hpp"
+#include "model/readable_order.hpp"
+#include "model/rewrite.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
 #include "phase/context.hpp"
 #include "print/print.hpp"
-#include "model/readable_order.hpp"
-#include <algorithm>
 
 namespace couplet {
 
@@ -60,11 +60,10 @@ void declare_in(phase::context& ctx, const quantum_number& q) {
     }
     ctx.declare_angular(q.name, q.parity == qn_parity::integer    ? phase::parity::integer
                                 : q.parity == qn_parity::half_odd ? phase::parity::half_odd
-                                                                   : phase::parity::unknown);
+                                                                  : phase::parity::unknown);
 }
 
 namespace {
-
 
 // Names back to symbols: the program's, else the expression's own.  A summation index that a
 // stage made (x1, ...) is in no table, and a new symbol of the same name would not be bound by
@@ -116,7 +115,8 @@ class reducer {
 public:
     // `rewrite` false: only prove each exponent integral and keep it as written (the readable
     // representative search is most of the cost, and a proof needs none of it).
-    reducer(const ex& whole, const quantum_numbers& numbers, bool rewrite = true) : numbers_(numbers), rewrite_(rewrite) {
+    reducer(const ex& whole, const quantum_numbers& numbers, bool rewrite = true)
+        : numbers_(numbers), rewrite_(rewrite) {
         for (const_preorder_iterator it = whole.preorder_begin(); it != whole.preorder_end(); ++it) {
             if (is_a<index_sum>(*it))
                 for (const ex& i : ex_to<index_sum>(*it).indices()) bound_names_.insert(ex_to<symbol>(i).get_name());

@@ -6,10 +6,10 @@
 
 #include <stdexcept>
 
+#include "limits/refusal.hpp"
 #include "model/quantum.hpp"
 #include "phase/context.hpp"
 #include "phase/linear_form.hpp"
-#include "limits/refusal.hpp"
 
 namespace couplet {
 

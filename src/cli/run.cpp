@@ -17,7 +17,8 @@
 namespace couplet::cli {
 namespace {
 
-const char* const exit_status_text = R"(Exit status: 0 done (every check holds), 1 a check fails, 2 bad input or a refused request,
+const char* const exit_status_text =
+    R"(Exit status: 0 done (every check holds), 1 a check fails, 2 bad input or a refused request,
 3 an internal check failed (a simplification changed the value; the input is printed as is).)";
 
 std::string help_footer() { return couplet::conventions_text() + exit_status_text; }
@@ -40,8 +41,7 @@ std::string read_all(std::istream& in) {
 void add_common_options(CLI::App& sub, request& r) {
     sub.add_option("FILE", r.file, "Input file, or - for standard input");
     sub.add_option("-e,--expr", r.text, "Take the input from TEXT instead of a file");
-    sub.add_option("--format", r.format, "Output format")
-        ->check(CLI::IsMember({"text", "latex", "json"}));
+    sub.add_option("--format", r.format, "Output format")->check(CLI::IsMember({"text", "latex", "json"}));
     sub.add_option("--depth", r.depth, "Check exactly at every admissible point with all free j <= DEPTH (default 2)")
         ->check(CLI::Range(0, 6));
     sub.add_option("--samples", r.samples, "Also check at N random points with larger j (default 200)")
@@ -52,8 +52,7 @@ void add_common_options(CLI::App& sub, request& r) {
     sub.add_flag("--as-written", r.as_written,
                  "Keep each 6j and 9j of the input in the input's arrangement (default: the canonical one, the "
                  "same in every file)");
-    sub.add_option("--max-terms", r.max_terms,
-                   "Refuse to expand an expression into more than N terms (default 100000)")
+    sub.add_option("--max-terms", r.max_terms, "Refuse to expand an expression into more than N terms (default 100000)")
         ->check(CLI::Range(std::size_t{1}, std::size_t{1000000000}));
     sub.add_option("--time-limit", r.time_limit,
                    "Stop after SECONDS of wall-clock time; statements finished by then are printed (default: none)")
@@ -164,8 +163,9 @@ int run_input(const request& r, const std::string& name, const std::string& text
 }  // namespace
 
 int run(const std::vector<std::string>& args, std::istream& in, std::ostream& out, std::ostream& err) {
-    CLI::App app{"couplet: sums over magnetic quantum numbers of 3j and Clebsch-Gordan products,\n"
-                 "reduced and checked by exact arithmetic."};
+    CLI::App app{
+        "couplet: sums over magnetic quantum numbers of 3j and Clebsch-Gordan products,\n"
+        "reduced and checked by exact arithmetic."};
     app.name("couplet");
     app.footer(help_footer());
     app.require_subcommand(1, 1);

@@ -1,7 +1,7 @@
 #include "eval/compile.hpp"
 
-#include <algorithm>
 #include <cln/integer.h>
+#include <algorithm>
 #include <set>
 
 #include "eval/plan.hpp"
@@ -100,16 +100,16 @@ private:
         p_.slot_of.emplace(s.get_name(), k);
         p_.slot_names.push_back(s.get_name());
         const quantum_number* q = numbers_.find(s);
-        p_.declared_parity.push_back(!q ? 0 : q->parity == qn_parity::integer ? 1
-                                          : q->parity == qn_parity::half_odd ? 2
-                                                                              : 0);
+        p_.declared_parity.push_back(!q                                 ? 0
+                                     : q->parity == qn_parity::integer  ? 1
+                                     : q->parity == qn_parity::half_odd ? 2
+                                                                        : 0);
         return k;
     }
 
     void note_free(int k) {
         if (std::find(bound_.begin(), bound_.end(), k) != bound_.end()) return;
-        if (std::find(p_.free_slots.begin(), p_.free_slots.end(), k) == p_.free_slots.end())
-            p_.free_slots.push_back(k);
+        if (std::find(p_.free_slots.begin(), p_.free_slots.end(), k) == p_.free_slots.end()) p_.free_slots.push_back(k);
     }
 
     linear form(const ex& e) {
@@ -151,20 +151,34 @@ private:
             n.kind = node_kind::root_power;
             n.exponent = (2 * k).to_long();
         } else {
-            throw evaluation_error("cannot evaluate " + n.text + " exactly: only integer powers and "
+            throw evaluation_error("cannot evaluate " + n.text +
+                                   " exactly: only integer powers and "
                                    "square roots are supported");
         }
     }
 
     void build_symbol(node& n, const ex& e) {
         switch (kind_of(e)) {
-            case symbol_kind::threej: n.kind = node_kind::threej; break;
-            case symbol_kind::clebsch_gordan: n.kind = node_kind::clebsch; break;
-            case symbol_kind::sixj: n.kind = node_kind::sixj; break;
-            case symbol_kind::ninej: n.kind = node_kind::ninej; break;
-            case symbol_kind::delta: n.kind = node_kind::delta; break;
-            case symbol_kind::triangle: n.kind = node_kind::triangle; break;
-            default: throw evaluation_error("cannot evaluate " + n.text);
+            case symbol_kind::threej:
+                n.kind = node_kind::threej;
+                break;
+            case symbol_kind::clebsch_gordan:
+                n.kind = node_kind::clebsch;
+                break;
+            case symbol_kind::sixj:
+                n.kind = node_kind::sixj;
+                break;
+            case symbol_kind::ninej:
+                n.kind = node_kind::ninej;
+                break;
+            case symbol_kind::delta:
+                n.kind = node_kind::delta;
+                break;
+            case symbol_kind::triangle:
+                n.kind = node_kind::triangle;
+                break;
+            default:
+                throw evaluation_error("cannot evaluate " + n.text);
         }
         n.source = e;
         for (const ex& a : e) n.forms.push_back(form(a));
@@ -229,7 +243,8 @@ private:
                 for (const ex& z : st.zeros) rules.push_back({rule_kind::zero, form(z)});
                 return;
             }
-            default: return;
+            default:
+                return;
         }
     }
 

@@ -1,7 +1,7 @@
 #pragma once
 
-#include "eval/evaluate.hpp"
 #include "eval/compiled.hpp"
+#include "eval/evaluate.hpp"
 
 namespace couplet::eval_detail {
 

@@ -23,7 +23,7 @@ namespace couplet::eval_detail {
 struct linear {
     cln::cl_RA constant = 0;
     std::vector<std::pair<int, cln::cl_RA>> terms;  // slot, coefficient
-    std::string text;                              // for messages
+    std::string text;                               // for messages
     // The same form on doubled values t = 2x, in machine integers: 2 * scale * value =
     // sum coefficient * t[slot] + constant, scale > 0.  Quantum numbers are multiples of 1/2,
     // so this is exact wherever every value is; `fits` is false when a coefficient is too large.
@@ -47,8 +47,20 @@ struct node;
 using node_ptr = std::unique_ptr<node>;
 
 enum class node_kind {
-    constant, variable, add, mul, power, root_power, phase, threej, clebsch, sixj, ninej, delta,
-    triangle, sum
+    constant,
+    variable,
+    add,
+    mul,
+    power,
+    root_power,
+    phase,
+    threej,
+    clebsch,
+    sixj,
+    ninej,
+    delta,
+    triangle,
+    sum
 };
 
 // Binds one summation index: a loop over the values its bounding rules leave, or solved from
@@ -68,7 +80,7 @@ struct summand_plan {
     std::vector<int> entry_checks;   // rules on the outer quantum numbers only
     std::vector<int> entry_factors;  // factors that do not depend on the indices: evaluated once
     std::vector<plan_step> steps;
-    std::string unbounded;           // the indices nothing bounds ("'x', 'y'"), or empty
+    std::string unbounded;  // the indices nothing bounds ("'x', 'y'"), or empty
 };
 
 struct summand {
@@ -80,16 +92,16 @@ struct summand {
 
 struct node {
     node_kind kind;
-    exact::number value;            // constant
-    int slot = -1;                  // variable
-    std::vector<node_ptr> children; // add, mul; power/root_power: one child
-    long exponent = 0;              // power: x^n; root_power: sqrt(x)^n
-    std::vector<linear> forms;      // phase (1), coupling symbols, delta, triangle
-    std::vector<int> indices;       // sum
-    std::vector<summand> terms;     // sum: the summands, each with its own bounds
-    std::string text;               // for messages
-    GiNaC::ex source;               // coupling symbols: the symbol, for its selection rules
-    std::vector<int> slots;         // the slots the value depends on, ascending (a sum's indices excluded)
+    exact::number value;             // constant
+    int slot = -1;                   // variable
+    std::vector<node_ptr> children;  // add, mul; power/root_power: one child
+    long exponent = 0;               // power: x^n; root_power: sqrt(x)^n
+    std::vector<linear> forms;       // phase (1), coupling symbols, delta, triangle
+    std::vector<int> indices;        // sum
+    std::vector<summand> terms;      // sum: the summands, each with its own bounds
+    std::string text;                // for messages
+    GiNaC::ex source;                // coupling symbols: the symbol, for its selection rules
+    std::vector<int> slots;          // the slots the value depends on, ascending (a sum's indices excluded)
 };
 
 // Values of coupling symbols already computed, by kind and doubled arguments: the same 3j
@@ -110,11 +122,11 @@ struct symbol_memo {
 struct program {
     node_ptr root;
     std::vector<std::string> slot_names;
-    std::vector<int> free_slots;    // slots that the caller must assign
+    std::vector<int> free_slots;  // slots that the caller must assign
     std::map<std::string, int> slot_of;
     std::vector<int> declared_parity;  // per slot: 0 any, 1 integer, 2 half-odd
-    bool doubled_forms_fit = true;  // every linear form has its machine-integer version
-    symbol_memo memo;  // filled by evaluation; a compiled expression is not shared between threads
+    bool doubled_forms_fit = true;     // every linear form has its machine-integer version
+    symbol_memo memo;                  // filled by evaluation; a compiled expression is not shared between threads
 };
 
 }  // namespace couplet::eval_detail

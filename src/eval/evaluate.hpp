@@ -5,9 +5,9 @@
 
 #include <map>
 #include <memory>
-#include <vector>
 #include <stdexcept>
 #include <string>
+#include <vector>
 
 #include "exact/number.hpp"
 #include "model/quantum.hpp"
@@ -34,8 +34,8 @@ public:
 enum class sum_enumeration { propagating, intervals };
 
 struct evaluation_limits {
-    long max_twice_j = 20000;           // 2j of any coupling-symbol entry
-    long max_sum_terms = 10'000'000;    // summand evaluations in one call
+    long max_twice_j = 20000;         // 2j of any coupling-symbol entry
+    long max_sum_terms = 10'000'000;  // summand evaluations in one call
     sum_enumeration enumeration = sum_enumeration::propagating;
 };
 

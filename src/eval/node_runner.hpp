@@ -5,10 +5,10 @@
 
 #include <optional>
 
+#include "eval/compiled.hpp"
 #include "eval/evaluate.hpp"
 #include "exact/admissibility.hpp"
 #include "exact/wigner.hpp"
-#include "eval/compiled.hpp"
 
 namespace couplet::eval_detail {
 
@@ -17,8 +17,10 @@ class node_runner {
 public:
     exact::number run(const node& n) {
         switch (n.kind) {
-            case node_kind::constant: return n.value;
-            case node_kind::variable: return self().variable(n.slot);
+            case node_kind::constant:
+                return n.value;
+            case node_kind::variable:
+                return self().variable(n.slot);
             case node_kind::add: {
                 exact::number s;
                 for (const auto& c : n.children) s += run(*c);
@@ -51,14 +53,18 @@ public:
                 }
                 return exact::power(root, n.exponent);
             }
-            case node_kind::phase: return exact::number(self().phase_is_odd(n.forms[0]) ? -1L : 1L);
-            case node_kind::delta: return exact::number(self().equal(n.forms[0], n.forms[1]) ? 1L : 0L);
+            case node_kind::phase:
+                return exact::number(self().phase_is_odd(n.forms[0]) ? -1L : 1L);
+            case node_kind::delta:
+                return exact::number(self().equal(n.forms[0], n.forms[1]) ? 1L : 0L);
             case node_kind::triangle: {
                 auto a = self().twice(n.forms[0]), b = self().twice(n.forms[1]), c = self().twice(n.forms[2]);
                 return a && b && c && exact::triangle(*a, *b, *c) ? exact::number(1L) : exact::number();
             }
-            case node_kind::sum: return self().sum(n);
-            default: return coupling_symbol(n);
+            case node_kind::sum:
+                return self().sum(n);
+            default:
+                return coupling_symbol(n);
         }
     }
 
@@ -91,10 +97,14 @@ private:
 
     static exact::number compute(node_kind kind, const symbol_memo::key& t) {
         switch (kind) {
-            case node_kind::threej: return exact::threej(t[0], t[1], t[2], t[3], t[4], t[5]);
-            case node_kind::clebsch: return exact::clebsch_gordan(t[0], t[1], t[2], t[3], t[4], t[5]);
-            case node_kind::sixj: return exact::sixj(t[0], t[1], t[2], t[3], t[4], t[5]);
-            default: return exact::ninej(t[0], t[1], t[2], t[3], t[4], t[5], t[6], t[7], t[8]);
+            case node_kind::threej:
+                return exact::threej(t[0], t[1], t[2], t[3], t[4], t[5]);
+            case node_kind::clebsch:
+                return exact::clebsch_gordan(t[0], t[1], t[2], t[3], t[4], t[5]);
+            case node_kind::sixj:
+                return exact::sixj(t[0], t[1], t[2], t[3], t[4], t[5]);
+            default:
+                return exact::ninej(t[0], t[1], t[2], t[3], t[4], t[5], t[6], t[7], t[8]);
         }
     }
 

@@ -17,8 +17,11 @@ class planner {
 public:
     planner(const std::vector<selection_rule>& rules, const std::vector<const node*>& factors,
             const std::vector<int>& indices)
-        : rules_(rules), factors_(factors), open_(indices.begin(), indices.end()),
-          rule_done_(rules.size(), false), factor_done_(factors.size(), false) {}
+        : rules_(rules),
+          factors_(factors),
+          open_(indices.begin(), indices.end()),
+          rule_done_(rules.size(), false),
+          factor_done_(factors.size(), false) {}
 
     summand_plan run(const std::vector<std::string>& slot_names) {
         summand_plan p;
@@ -123,8 +126,7 @@ private:
     void take_parity_rule(plan_step& step) const {
         for (auto it = step.checks.begin(); it != step.checks.end(); ++it) {
             const selection_rule& r = rules_[*it];
-            if (r.kind == rule_kind::integral && r.form.doubled.scale == 1 &&
-                coefficient(r.form, step.slot) % 2 != 0) {
+            if (r.kind == rule_kind::integral && r.form.doubled.scale == 1 && coefficient(r.form, step.slot) % 2 != 0) {
                 step.parity_rule = *it;
                 step.checks.erase(it);
                 return;

@@ -12,8 +12,8 @@
 #include <sstream>
 #include <stdexcept>
 
-#include "limits/run_limits.hpp"
 #include "eval/node_runner.hpp"
+#include "limits/run_limits.hpp"
 
 namespace couplet::eval_detail {
 
@@ -44,8 +44,7 @@ public:
     long doubled(const linear& f) const {
         __int128 v = f.doubled.constant;
         for (const auto& [s, c] : f.doubled.terms) v += static_cast<__int128>(c) * t_[s];
-        if (v > largest_form || v < -largest_form)
-            throw evaluation_error("'" + f.text + "' is too large to evaluate");
+        if (v > largest_form || v < -largest_form) throw evaluation_error("'" + f.text + "' is too large to evaluate");
         return static_cast<long>(v);
     }
 
@@ -90,9 +89,12 @@ private:
     bool holds(const selection_rule& r) const {
         long n = doubled(r.form);
         switch (r.kind) {
-            case rule_kind::nonnegative: return n >= 0;
-            case rule_kind::zero: return n == 0;
-            default: return n % (2 * r.form.doubled.scale) == 0;
+            case rule_kind::nonnegative:
+                return n >= 0;
+            case rule_kind::zero:
+                return n == 0;
+            default:
+                return n % (2 * r.form.doubled.scale) == 0;
         }
     }
 
@@ -141,8 +143,8 @@ private:
     // that cannot be evaluated (a half-integer phase exponent) is an error only for a term
     // that survives every rule and every other factor: it is carried down as `undefined`.
     template <typename Next>
-    void apply_factors(const summand& s, const std::vector<int>& factors, const exact::number& partial,
-                       bool negative, std::exception_ptr undefined, Next&& next) {
+    void apply_factors(const summand& s, const std::vector<int>& factors, const exact::number& partial, bool negative,
+                       std::exception_ptr undefined, Next&& next) {
         const exact::number* value = &partial;
         exact::number product;
         for (int f : factors) {
@@ -220,10 +222,9 @@ private:
               const std::exception_ptr& undefined, totals& sum) {
         const plan_step& step = s.plan.steps[k];
         if (!all_hold(s, step.checks)) return;
-        apply_factors(s, step.factors, partial, negative, undefined,
-                      [&](const exact::number& p, bool n, const std::exception_ptr& u) {
-                          descend(s, k + 1, p, n, u, sum);
-                      });
+        apply_factors(
+            s, step.factors, partial, negative, undefined,
+            [&](const exact::number& p, bool n, const std::exception_ptr& u) { descend(s, k + 1, p, n, u, sum); });
     }
 
     program& p_;

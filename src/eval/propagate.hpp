@@ -8,8 +8,8 @@
 #include <utility>
 #include <vector>
 
-#include "eval/evaluate.hpp"
 #include "eval/compiled.hpp"
+#include "eval/evaluate.hpp"
 
 namespace couplet::eval_detail {
 

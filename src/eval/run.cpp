@@ -10,10 +10,10 @@
 #include <optional>
 #include <sstream>
 
-#include "limits/run_limits.hpp"
 #include "eval/compile.hpp"
 #include "eval/node_runner.hpp"
 #include "eval/propagate.hpp"
+#include "limits/run_limits.hpp"
 
 namespace couplet {
 
@@ -38,7 +38,11 @@ std::string show(const cln::cl_RA& q) {
 class machine : public eval_detail::node_runner<machine> {
 public:
     machine(const eval_detail::program& p, const evaluation_limits& limits)
-        : node_runner(nullptr), p_(p), limits_(limits), value_(p.slot_names.size()), known_(p.slot_names.size(), false) {}
+        : node_runner(nullptr),
+          p_(p),
+          limits_(limits),
+          value_(p.slot_names.size()),
+          known_(p.slot_names.size(), false) {}
 
     void assign(int slot, const cln::cl_RA& v) {
         value_[slot] = v;
@@ -101,9 +105,12 @@ public:
     bool rule_holds(const selection_rule& r) const {
         cln::cl_RA v = value(r.form);
         switch (r.kind) {
-            case rule_kind::nonnegative: return !cln::minusp(v);
-            case rule_kind::zero: return cln::zerop(v);
-            default: return is_integer(v);
+            case rule_kind::nonnegative:
+                return !cln::minusp(v);
+            case rule_kind::zero:
+                return cln::zerop(v);
+            default:
+                return is_integer(v);
         }
     }
 
@@ -189,8 +196,7 @@ public:
 
 }  // namespace
 
-compiled_expression::compiled_expression(const GiNaC::ex& e, const quantum_numbers& numbers,
-                                         evaluation_limits limits)
+compiled_expression::compiled_expression(const GiNaC::ex& e, const quantum_numbers& numbers, evaluation_limits limits)
     : program_(std::make_unique<eval_detail::program>(eval_detail::compile(e, numbers))), limits_(limits) {}
 compiled_expression::~compiled_expression() = default;
 compiled_expression::compiled_expression(compiled_expression&&) noexcept = default;
@@ -201,8 +207,8 @@ exact::number compiled_expression::at(const assignment& values) const {
     std::vector<std::string> missing;
     for (int slot : program_->free_slots) {
         const std::string& name = program_->slot_names[slot];
-        auto it = std::find_if(values.begin(), values.end(),
-                               [&](const auto& kv) { return kv.first.get_name() == name; });
+        auto it =
+            std::find_if(values.begin(), values.end(), [&](const auto& kv) { return kv.first.get_name() == name; });
         if (it == values.end()) {
             missing.push_back(name);
             continue;
@@ -212,8 +218,7 @@ exact::number compiled_expression::at(const assignment& values) const {
     if (!missing.empty()) {
         std::string list;
         for (const auto& n : missing) list += (list.empty() ? "" : ", ") + n;
-        throw evaluation_error("no value given for " + list + " (write: eval EXPR at " + missing.front() +
-                               "=...)");
+        throw evaluation_error("no value given for " + list + " (write: eval EXPR at " + missing.front() + "=...)");
     }
     if (limits_.enumeration == sum_enumeration::propagating)
         if (auto v = eval_detail::run_propagating(*program_, limits_, given)) return *v;

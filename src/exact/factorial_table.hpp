@@ -51,11 +51,21 @@ public:
         // The usual multipliers get loops without an integer multiply (which baseline
         // x86-64 SIMD lacks for 32-bit lanes).
         switch (times) {
-        case 1: add_blocks(acc, src, count, [](block a, block b) { return a + b; }); break;
-        case -1: add_blocks(acc, src, count, [](block a, block b) { return a - b; }); break;
-        case 2: add_blocks(acc, src, count, [](block a, block b) { return a + b + b; }); break;
-        case -2: add_blocks(acc, src, count, [](block a, block b) { return a - b - b; }); break;
-        default: add_blocks(acc, src, count, [times](block a, block b) { return a + times * b; }); break;
+            case 1:
+                add_blocks(acc, src, count, [](block a, block b) { return a + b; });
+                break;
+            case -1:
+                add_blocks(acc, src, count, [](block a, block b) { return a - b; });
+                break;
+            case 2:
+                add_blocks(acc, src, count, [](block a, block b) { return a + b + b; });
+                break;
+            case -2:
+                add_blocks(acc, src, count, [](block a, block b) { return a - b - b; });
+                break;
+            default:
+                add_blocks(acc, src, count, [times](block a, block b) { return a + times * b; });
+                break;
         }
     }
 

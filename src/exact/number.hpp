@@ -24,8 +24,8 @@ public:
     using term_map = std::map<cln::cl_I, cln::cl_RA, radicand_less>;
 
     number() = default;
-    number(long value);                  // NOLINT: implicit, an integer is a number
-    number(const cln::cl_RA& value);     // NOLINT: implicit, a rational is a number
+    number(long value);               // NOLINT: implicit, an integer is a number
+    number(const cln::cl_RA& value);  // NOLINT: implicit, a rational is a number
 
     // sqrt(x) for a rational x >= 0, written as q*sqrt(r) with r square-free.
     // Throws std::domain_error for x < 0, and for a (huge) x whose square-free part cannot
@@ -34,8 +34,7 @@ public:
 
     // coefficient * sqrt(radicand).  Precondition (not checked beyond radicand > 0, since
     // checking needs factoring): radicand is square-free.  Throws std::domain_error if <= 0.
-    static number from_squarefree_term(const cln::cl_RA& coefficient,
-                                       const cln::cl_I& squarefree_radicand);
+    static number from_squarefree_term(const cln::cl_RA& coefficient, const cln::cl_I& squarefree_radicand);
 
     const term_map& terms() const { return terms_; }
     bool is_zero() const { return terms_.empty(); }

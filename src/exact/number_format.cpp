@@ -1,7 +1,7 @@
 // Printing: the couplet input syntax, doubles, and decimals.
 
-#include "exact/number.hpp"
 #include "exact/float_enclosure.hpp"
+#include "exact/number.hpp"
 
 #include <cln/float.h>
 #include <cln/integer_io.h>
@@ -22,7 +22,6 @@ std::string decimal_string(const cln::cl_I& x) {
     cln::fprintdecimal(os, x);
     return os.str();
 }
-
 
 // A long-float value of x whose relative error is below 2^-(wanted_bits).
 cln::cl_F accurate_float(const number::term_map& terms, unsigned wanted_bits) {
@@ -63,8 +62,10 @@ std::string number::to_string() const {
     bool first = true;
     for (const auto& [radicand, coefficient] : terms_) {
         const cln::cl_I num = cln::numerator(coefficient), den = cln::denominator(coefficient);
-        if (cln::minusp(num)) out += "-";
-        else if (!first) out += "+";
+        if (cln::minusp(num))
+            out += "-";
+        else if (!first)
+            out += "+";
         const cln::cl_I magnitude = cln::abs(num);
         if (radicand == 1) {
             out += decimal_string(magnitude);
@@ -88,7 +89,8 @@ std::string number::to_decimal(int significant_digits) const {
     if (terms_.empty()) return "0";
     const long digits = significant_digits;
     // (cln::expt_pos never returns for exponent 0)
-    const cln::cl_I lowest = digits == 1 ? cln::cl_I(1) : cln::expt_pos(cln::cl_I(10), static_cast<unsigned long>(digits - 1));
+    const cln::cl_I lowest =
+        digits == 1 ? cln::cl_I(1) : cln::expt_pos(cln::cl_I(10), static_cast<unsigned long>(digits - 1));
     const cln::cl_I beyond = lowest * 10;
     cln::cl_I scaled;  // round(|x| * 10^(digits-1-exponent)), in [lowest, beyond)
     long exponent;     // floor(log10 |x|)
@@ -99,7 +101,8 @@ std::string number::to_decimal(int significant_digits) const {
         const auto& [radicand, coefficient] = *terms_.begin();
         negative = cln::minusp(coefficient);
         const cln::cl_RA square = coefficient * coefficient * radicand;
-        long bits2 = long(cln::integer_length(cln::numerator(square))) - long(cln::integer_length(cln::denominator(square)));
+        long bits2 =
+            long(cln::integer_length(cln::numerator(square))) - long(cln::integer_length(cln::denominator(square)));
         exponent = static_cast<long>(std::floor(double(bits2) * 0.5 * 0.30102999566398120));
         while (square >= power_of_ten(2 * (exponent + 1))) ++exponent;
         while (square < power_of_ten(2 * exponent)) --exponent;
@@ -119,9 +122,12 @@ std::string number::to_decimal(int significant_digits) const {
         exponent = static_cast<long>(std::floor(double(cln::float_exponent(magnitude)) * 0.30102999566398120));
         for (int guard = 0; guard < 8; ++guard) {
             scaled = cln::round1(magnitude * power_of_ten(digits - 1 - exponent));
-            if (scaled >= beyond) ++exponent;
-            else if (scaled < lowest) --exponent;
-            else break;
+            if (scaled >= beyond)
+                ++exponent;
+            else if (scaled < lowest)
+                --exponent;
+            else
+                break;
         }
     }
     return format_digits(negative, decimal_string(scaled), exponent);

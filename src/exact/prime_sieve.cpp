@@ -33,8 +33,8 @@ void prime_sieve::rebuild(std::uint32_t new_limit) {
 
 std::size_t prime_sieve::count_upto(std::uint64_t n) const {
     if (n > limit_) throw std::logic_error("prime_sieve::count_upto beyond the sieve limit");
-    return static_cast<std::size_t>(
-        std::upper_bound(primes_.begin(), primes_.end(), static_cast<std::uint32_t>(n)) - primes_.begin());
+    return static_cast<std::size_t>(std::upper_bound(primes_.begin(), primes_.end(), static_cast<std::uint32_t>(n)) -
+                                    primes_.begin());
 }
 
 std::size_t prime_sieve::index_of(std::uint32_t prime) const {

@@ -126,11 +126,11 @@ void racah_series::sum(natural& magnitude, bool& negative) const {
 
 racah_series threej_series(long tj1, long tj2, long tj3, long tm1, long tm2) {
     racah_series series;
-    const long a = (tj1 + tj2 - tj3) / 2;   // j1+j2-j3
-    const long b = (tj1 - tm1) / 2;         // j1-m1
-    const long c = (tj2 + tm2) / 2;         // j2+m2
-    const long d = (tj3 - tj2 + tm1) / 2;   // j3-j2+m1
-    const long e = (tj3 - tj1 - tm2) / 2;   // j3-j1-m2
+    const long a = (tj1 + tj2 - tj3) / 2;  // j1+j2-j3
+    const long b = (tj1 - tm1) / 2;        // j1-m1
+    const long c = (tj2 + tm2) / 2;        // j2+m2
+    const long d = (tj3 - tj2 + tm1) / 2;  // j3-j2+m1
+    const long e = (tj3 - tj1 - tm2) / 2;  // j3-j1-m2
     series.rising_denominator = {0, d, e, 0};
     series.rising_denominator_count = 3;
     series.falling_denominator = {a, b, c, 0};

@@ -21,8 +21,8 @@ namespace couplet::exact::detail {
 
 struct racah_series {
     long first = 0;
-    long last = -1;  // empty when last < first
-    std::array<long, 1> rising_numerator{};    // (s+a)! in the numerator
+    long last = -1;                          // empty when last < first
+    std::array<long, 1> rising_numerator{};  // (s+a)! in the numerator
     int rising_numerator_count = 0;
     std::array<long, 4> rising_denominator{};  // (s+b)! in the denominator
     int rising_denominator_count = 0;
@@ -47,7 +47,6 @@ racah_series sixj_series(long ta, long tb, long tc, long td, long te, long tf);
 
 // acc += times * exponents of Delta(abc)^2 = (a+b-c)!(a-b+c)!(-a+b+c)!/(a+b+c+1)!, doubled
 // arguments of an admissible triad.
-void accumulate_triangle(factorial_table& table, std::int32_t* acc, long ta, long tb, long tc,
-                         std::int32_t times);
+void accumulate_triangle(factorial_table& table, std::int32_t* acc, long ta, long tb, long tc, std::int32_t times);
 
 }  // namespace couplet::exact::detail

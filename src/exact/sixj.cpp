@@ -22,8 +22,8 @@ number sixj(long ta, long tb, long tc, long td, long te, long tf) {
     const detail::racah_series series = detail::sixj_series(ta, tb, tc, td, te, tf);
     if (series.empty()) return number();
 
-    const long largest = std::max({series.largest_factorial_argument(), (ta + tb + tc) / 2 + 1,
-                                   (ta + te + tf) / 2 + 1, (td + tb + tf) / 2 + 1, (td + te + tc) / 2 + 1});
+    const long largest = std::max({series.largest_factorial_argument(), (ta + tb + tc) / 2 + 1, (ta + te + tf) / 2 + 1,
+                                   (td + tb + tf) / 2 + 1, (td + te + tc) / 2 + 1});
     const std::size_t primes = table.prime_count(static_cast<std::uint64_t>(largest));
     thread_local std::vector<std::int32_t> twice_exponents;
     twice_exponents.assign(factorial_table::padded(primes), 0);

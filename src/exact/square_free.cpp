@@ -27,8 +27,9 @@ void split_square(cln::cl_I m, cln::cl_I& square, cln::cl_I& squarefree) {
     for (;;) {
         if (index == sieve.primes().size()) {
             if (sieve.limit() >= trial_division_limit)
-                throw std::domain_error("couplet::exact::number::sqrt_of: cannot certify the square-free part of an "
-                                        "integer with a cofactor above 2^60 free of primes below 2^20");
+                throw std::domain_error(
+                    "couplet::exact::number::sqrt_of: cannot certify the square-free part of an "
+                    "integer with a cofactor above 2^60 free of primes below 2^20");
             sieve.ensure(2 * sieve.limit());
         }
         const std::uint32_t p = sieve.primes()[index++];
@@ -46,8 +47,10 @@ void split_square(cln::cl_I m, cln::cl_I& square, cln::cl_I& squarefree) {
         if (e & 1) squarefree = squarefree * pp;
     }
     cln::cl_I root;
-    if (cln::sqrtp(m, &root)) square = square * root;
-    else squarefree = squarefree * m;
+    if (cln::sqrtp(m, &root))
+        square = square * root;
+    else
+        squarefree = squarefree * m;
 }
 
 }  // namespace

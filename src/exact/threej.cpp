@@ -23,14 +23,13 @@ bool threej_admissible(long tj1, long tj2, long tj3, long tm1, long tm2, long tm
 }
 
 // The admissible 3j times sqrt(extra_factor) times (-1)^extra_phase.
-number threej_scaled(long tj1, long tj2, long tj3, long tm1, long tm2, long tm3, long extra_factor,
-                     bool extra_phase) {
+number threej_scaled(long tj1, long tj2, long tj3, long tm1, long tm2, long tm3, long extra_factor, bool extra_phase) {
     factorial_table& table = shared_factorial_table();
     const detail::racah_series series = detail::threej_series(tj1, tj2, tj3, tm1, tm2);
     if (series.empty()) return number();
 
-    const long largest = std::max({(tj1 + tj2 + tj3) / 2 + 1, tj1, tj2, tj3, extra_factor,
-                                   series.largest_factorial_argument()});
+    const long largest =
+        std::max({(tj1 + tj2 + tj3) / 2 + 1, tj1, tj2, tj3, extra_factor, series.largest_factorial_argument()});
     const std::size_t primes = table.prime_count(static_cast<std::uint64_t>(largest));
     thread_local std::vector<std::int32_t> twice_exponents;
     twice_exponents.assign(factorial_table::padded(primes), 0);

@@ -1,8 +1,8 @@
 #include <algorithm>
 #include <limits>
 
-#include "model/symbols.hpp"
 #include "limits/run_limits.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet {
 

@@ -20,8 +20,8 @@ namespace couplet {
 
 struct identity {
     std::string name;
-    std::string reference;  // a DLMF equation, a handbook section, or "common practice, no source"
-    GiNaC::ex left, right;  // the instance
+    std::string reference;    // a DLMF equation, a handbook section, or "common practice, no source"
+    GiNaC::ex left, right;    // the instance
     quantum_numbers numbers;  // the roles, owners and parities of the pattern symbols
 };
 
@@ -75,6 +75,5 @@ inline derivation_step step_by(const identity& used, const GiNaC::ex& before, co
                                bool shown_as_recorded = false) {
     return {used.name, used.reference, before, after, shown_as_recorded};
 }
-
 
 }  // namespace couplet

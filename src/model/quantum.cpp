@@ -12,9 +12,12 @@ namespace couplet {
 
 const char* describe(qn_role role) {
     switch (role) {
-        case qn_role::angular: return "an angular momentum";
-        case qn_role::projection: return "a projection";
-        default: return "a plain variable";
+        case qn_role::angular:
+            return "an angular momentum";
+        case qn_role::projection:
+            return "a projection";
+        default:
+            return "a plain variable";
     }
 }
 
@@ -35,18 +38,14 @@ const quantum_number* quantum_numbers::find(const std::string& name) const {
     return it == by_name_.end() ? nullptr : &numbers_[it->second];
 }
 
-const quantum_number* quantum_numbers::find(const GiNaC::symbol& s) const {
-    return find(s.get_name());
-}
+const quantum_number* quantum_numbers::find(const GiNaC::symbol& s) const { return find(s.get_name()); }
 
 const quantum_number& quantum_numbers::at(const GiNaC::symbol& s) const {
     if (const quantum_number* q = find(s)) return *q;
     throw std::logic_error("unknown quantum number " + s.get_name());
 }
 
-quantum_number& quantum_numbers::entry(const GiNaC::symbol& s) {
-    return numbers_[by_name_.at(s.get_name())];
-}
+quantum_number& quantum_numbers::entry(const GiNaC::symbol& s) { return numbers_[by_name_.at(s.get_name())]; }
 
 void quantum_numbers::assign_role(const GiNaC::symbol& s, qn_role role, std::size_t offset) {
     quantum_number& q = entry(s);
@@ -56,8 +55,8 @@ void quantum_numbers::assign_role(const GiNaC::symbol& s, qn_role role, std::siz
         return;
     }
     if (q.role != role)
-        throw user_error(offset, "'" + q.name + "' is used here as " + describe(role) +
-                                     ", but it is " + describe(q.role) + " elsewhere");
+        throw user_error(offset, "'" + q.name + "' is used here as " + describe(role) + ", but it is " +
+                                     describe(q.role) + " elsewhere");
 }
 
 void quantum_numbers::set_owner_if_unset(const GiNaC::symbol& s, const GiNaC::ex& owner) {

@@ -53,8 +53,7 @@ std::string unsigned_term(const ex& t) {
 
 bool negative_term(const ex& t) {
     if (is_a<numeric>(t)) return ex_to<numeric>(t).is_negative();
-    return is_a<mul>(t) && is_a<numeric>(t.op(t.nops() - 1)) &&
-           ex_to<numeric>(t.op(t.nops() - 1)).is_negative();
+    return is_a<mul>(t) && is_a<numeric>(t.op(t.nops() - 1)) && ex_to<numeric>(t.op(t.nops() - 1)).is_negative();
 }
 
 ex without_coefficient(const ex& t) {
@@ -88,8 +87,10 @@ std::string readable_key(const ex& e) {
     std::string key;
     for (std::size_t i = 0; i < terms.size(); ++i) {
         bool minus = negative_term(terms[i]);
-        if (minus) key += "-";
-        else if (i > 0) key += "+";
+        if (minus)
+            key += "-";
+        else if (i > 0)
+            key += "+";
         key += unsigned_term(terms[i]);
     }
     return key;

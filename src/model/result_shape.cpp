@@ -9,10 +9,17 @@ result_shape shape_of(const GiNaC::ex& e) {
     for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it) {
         if (GiNaC::is_a<index_sum>(*it)) s.indices += static_cast<int>(GiNaC::ex_to<index_sum>(*it).indices().nops());
         switch (kind_of(*it)) {
-            case symbol_kind::ninej: ++s.ninej; break;
-            case symbol_kind::sixj: ++s.sixj; break;
-            case symbol_kind::threej: ++s.threej; break;
-            default: break;
+            case symbol_kind::ninej:
+                ++s.ninej;
+                break;
+            case symbol_kind::sixj:
+                ++s.sixj;
+                break;
+            case symbol_kind::threej:
+                ++s.threej;
+                break;
+            default:
+                break;
         }
     }
     return s;

@@ -32,9 +32,14 @@ void add_structure(const ex& f, coupling_structure& out) {
             for (int r = 0; r < 3; ++r) out.triads.push_back({f.op(3 * r), f.op(3 * r + 1), f.op(3 * r + 2)});
             for (int c = 0; c < 3; ++c) out.triads.push_back({f.op(c), f.op(3 + c), f.op(6 + c)});
             return;
-        case symbol_kind::triangle: out.triads.push_back({f.op(0), f.op(1), f.op(2)}); return;
-        case symbol_kind::delta: out.zeros.push_back(f.op(0) - f.op(1)); return;
-        default: return;
+        case symbol_kind::triangle:
+            out.triads.push_back({f.op(0), f.op(1), f.op(2)});
+            return;
+        case symbol_kind::delta:
+            out.zeros.push_back(f.op(0) - f.op(1));
+            return;
+        default:
+            return;
     }
 }
 

@@ -12,7 +12,7 @@
 namespace couplet {
 
 struct coupling_structure {
-    std::vector<std::array<GiNaC::ex, 3>> triads;            // a+b+c integral, triangle
+    std::vector<std::array<GiNaC::ex, 3>> triads;              // a+b+c integral, triangle
     std::vector<std::pair<GiNaC::ex, GiNaC::ex>> projections;  // (j, m): j-m integral, |m| <= j
     std::vector<GiNaC::ex> zeros;                              // m1+m2+m3, x-y of delta(x, y)
 };

@@ -4,8 +4,8 @@
 
 #include "model/readable_order.hpp"
 
-#include <algorithm>
 #include <cln/rational.h>
+#include <algorithm>
 
 namespace couplet {
 
@@ -60,8 +60,8 @@ ex wigner6j_eval(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e
     return zero_or_held(wigner6j(a, b, c, d, e, f).hold());
 }
 
-ex wigner9j_eval(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e, const ex& f,
-                 const ex& g, const ex& h, const ex& i) {
+ex wigner9j_eval(const ex& a, const ex& b, const ex& c, const ex& d, const ex& e, const ex& f, const ex& g, const ex& h,
+                 const ex& i) {
     return zero_or_held(wigner9j(a, b, c, d, e, f, g, h, i).hold());
 }
 
@@ -111,8 +111,7 @@ symbol_kind kind_of(const ex& e) {
 
 // ---- phase ---------------------------------------------------------------------------------
 
-GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(phase_factor, basic,
-                                     print_func<print_context>(&phase_factor::do_print))
+GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(phase_factor, basic, print_func<print_context>(&phase_factor::do_print))
 
 phase_factor::phase_factor() {}
 phase_factor::phase_factor(const ex& exponent) : x_(exponent) {}
@@ -155,8 +154,7 @@ ex make_phase(const ex& exponent) { return phase_factor(exponent).eval(); }
 
 // ---- index_sum -----------------------------------------------------------------------------
 
-GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(index_sum, basic,
-                                     print_func<print_context>(&index_sum::do_print))
+GINAC_IMPLEMENT_REGISTERED_CLASS_OPT(index_sum, basic, print_func<print_context>(&index_sum::do_print))
 
 index_sum::index_sum() {}
 index_sum::index_sum(const ex& body, const lst& indices) : body_(body), indices_(indices) {}
@@ -176,8 +174,7 @@ ex index_sum::subs(const exmap& m, unsigned options) const {
     exmap free_part;
     for (const auto& entry : m) {
         const ex& from = entry.first;
-        bool bound = std::any_of(indices_.begin(), indices_.end(),
-                                 [&](const ex& i) { return from.is_equal(i); });
+        bool bound = std::any_of(indices_.begin(), indices_.end(), [&](const ex& i) { return from.is_equal(i); });
         if (!bound) free_part.insert(entry);
     }
     ex b = body_.subs(free_part, options);

@@ -3,10 +3,10 @@
 #include <algorithm>
 #include <optional>
 
+#include "canonical/symmetries.hpp"
 #include "model/normalize.hpp"
 #include "model/same_value.hpp"
 #include "model/symbols.hpp"
-#include "canonical/symmetries.hpp"
 #include "network/rewrites.hpp"
 
 namespace couplet::network {
@@ -14,7 +14,6 @@ namespace couplet::network {
 using namespace GiNaC;
 
 namespace {
-
 
 // The summand split into its (-1) exponent, the 3j that hold J or M, and the rest.
 struct split_summand {
@@ -107,8 +106,9 @@ std::optional<ex> apply(const ex& body, const symbol& j, const symbol& m, const 
             const ex &x = a.symbol, &y = b.symbol;
             if (!same_value(x.op(0), y.op(0)) || !same_value(x.op(1), y.op(1))) continue;
             bool ranged = true;
-            for (int c : {0, 1}) ranged = ranged && projection_of(x.op(3 + c), x.op(c), numbers, bound) &&
-                                           projection_of(y.op(3 + c), y.op(c), numbers, bound);
+            for (int c : {0, 1})
+                ranged = ranged && projection_of(x.op(3 + c), x.op(c), numbers, bound) &&
+                         projection_of(y.op(3 + c), y.op(c), numbers, bound);
             if (!ranged) continue;
             auto exponent = exponent_free_of(parts->exponent + a.phase + b.phase, x, j, m);
             if (!exponent) continue;
@@ -134,8 +134,10 @@ std::optional<std::pair<lst, ex>> nested_sum(const ex& body) {
         for (const ex& t : body) {
             auto inner = nested_sum(t);
             if (!inner || is_a<add>(t)) return std::nullopt;
-            if (!indices) indices = inner->first;
-            else if (!inner->first.is_equal(*indices)) return std::nullopt;
+            if (!indices)
+                indices = inner->first;
+            else if (!inner->first.is_equal(*indices))
+                return std::nullopt;
             merged += inner->second;
         }
         if (!indices) return std::nullopt;
@@ -145,8 +147,10 @@ std::optional<std::pair<lst, ex>> nested_sum(const ex& body) {
     std::optional<index_sum> inner;
     ex outside = 1;
     for (const ex& f : body) {
-        if (is_a<index_sum>(f) && !inner) inner = ex_to<index_sum>(f);
-        else outside *= f;
+        if (is_a<index_sum>(f) && !inner)
+            inner = ex_to<index_sum>(f);
+        else
+            outside *= f;
     }
     if (!inner) return std::nullopt;
     for (const ex& i : inner->indices())

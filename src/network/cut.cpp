@@ -32,8 +32,10 @@ std::vector<slot> slots_of(const msum_term& t, const line& l) {
         if (v < 0) continue;
         for (int c = 0; c < 3; ++c) {
             const ex& entry = t.threejs[v].op(3 + c);
-            if ((entry - l.projection).expand().is_zero()) out.push_back({v, c, 1});
-            else if ((entry + l.projection).expand().is_zero()) out.push_back({v, c, -1});
+            if ((entry - l.projection).expand().is_zero())
+                out.push_back({v, c, 1});
+            else if ((entry + l.projection).expand().is_zero())
+                out.push_back({v, c, -1});
         }
     }
     return out;
@@ -247,8 +249,8 @@ struct side {
 // The invariant of A is proportional to delta(j1, j2) (-1)^(j1 - m1') delta(m1' + m2', 0) with
 // m' the flipped A entries: q = s p on the joined line.  False where the two angular momenta
 // differ and neither is a name that the delta can identify with the other.
-bool close_on_two_lines(const cut_reading& cut, const separation_variant& variant, side& a, side& b,
-                        exmap& identify, separation& out) {
+bool close_on_two_lines(const cut_reading& cut, const separation_variant& variant, side& a, side& b, exmap& identify,
+                        separation& out) {
     const auto& p = cut.p;
     const auto& j = cut.j;
     out.used = &two_line_cut_identity();
@@ -274,8 +276,7 @@ bool close_on_two_lines(const cut_reading& cut, const separation_variant& varian
 
 // The invariant of A is a multiple of the 3j of the cut lines, and sum(m's : 3j^2) = 1 on its
 // triad: both sides are closed with that 3j, A's side on new projections.
-void close_on_three_lines(const cut_reading& cut, const std::vector<symbol>& fresh, side& a, side& b,
-                          separation& out) {
+void close_on_three_lines(const cut_reading& cut, const std::vector<symbol>& fresh, side& a, side& b, separation& out) {
     const auto& p = cut.p;
     const auto& j = cut.j;
     out.used = &three_line_cut_identity();

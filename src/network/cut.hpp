@@ -43,8 +43,8 @@ struct separation_variant {
 
 struct separation {
     const identity* used = nullptr;  // two_line_cut_identity or three_line_cut_identity
-    GiNaC::ex factor;             // delta(j1, j2) / (2 j1 + 1) or 1, times the phase free of projections
-    GiNaC::ex body_a, body_b;     // the closed parts' summands
+    GiNaC::ex factor;                // delta(j1, j2) / (2 j1 + 1) or 1, times the phase free of projections
+    GiNaC::ex body_a, body_b;        // the closed parts' summands
     GiNaC::lst indices_a, indices_b;
 };
 

@@ -24,8 +24,10 @@ std::optional<ex> fix_projection_by_vertex(const msum_term& term) {
             int slot = -1;
             bool others_free = true;
             for (int c = 3; c < 6; ++c) {
-                if (s.op(c).has(l.projection)) slot = c;
-                else if (has_any(s.op(c), term.summed)) others_free = false;
+                if (s.op(c).has(l.projection))
+                    slot = c;
+                else if (has_any(s.op(c), term.summed))
+                    others_free = false;
             }
             if (slot < 0 || !others_free) continue;
             ex others = s.op(3) + s.op(4) + s.op(5) - s.op(slot);

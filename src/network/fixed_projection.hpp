@@ -12,7 +12,6 @@
 
 namespace couplet::network {
 
-
 // The term with one such projection substituted and its index dropped, or nothing.
 std::optional<GiNaC::ex> fix_projection_by_vertex(const msum_term& term);
 

@@ -3,9 +3,9 @@
 #include <algorithm>
 #include <cstdint>
 
+#include "canonical/symmetries.hpp"
 #include "model/same_value.hpp"
 #include "model/symbols.hpp"
-#include "canonical/symmetries.hpp"
 
 namespace couplet::network {
 
@@ -107,8 +107,7 @@ private:
         std::vector<int> image(k);
         for (std::size_t q = 0; q < k; ++q) image[q] = chosen_[q].first;
         for (std::size_t v = 0; v < term_.threejs.size(); ++v) {
-            if (used_[v] || !fits(k, v, image) || !holds_bound_lines(move_.threejs[k], lines_at_[v], binding))
-                continue;
+            if (used_[v] || !fits(k, v, image) || !holds_bound_lines(move_.threejs[k], lines_at_[v], binding)) continue;
             used_[v] = true;
             if (orbits_[v].empty()) orbits_[v] = symmetry::threej_orbit(term_.threejs[v]);
             for (std::size_t o = 0; o < orbits_[v].size(); ++o) {

@@ -77,36 +77,30 @@ std::vector<move> build() {
 
     // The 6j as a closed network of four 3j.
     out.push_back(make_move("four 3j to a 6j", "DLMF 34.4.1",
-                   {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, l2, l3, m1, u2, -u3),
-                    wigner3j(l1, j2, l3, -u1, m2, u3), wigner3j(l1, l2, j3, u1, -u2, m3)},
-                   l1 + l2 + l3 + u1 + u2 + u3,
-                   lst{m1, m2, m3, u1, u2, u3},
-                   wigner6j(j1, j2, j3, l1, l2, l3)));
+                            {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, l2, l3, m1, u2, -u3),
+                             wigner3j(l1, j2, l3, -u1, m2, u3), wigner3j(l1, l2, j3, u1, -u2, m3)},
+                            l1 + l2 + l3 + u1 + u2 + u3, lst{m1, m2, m3, u1, u2, u3},
+                            wigner6j(j1, j2, j3, l1, l2, l3)));
 
     // A triangle with one free line at each corner: the Wigner-Eckart form 3j x 6j.
-    out.push_back(make_move("triangle to 3j times 6j", "DLMF 34.5.23",
-                   {wigner3j(j1, l2, l3, m1, u2, -u3), wigner3j(l1, j2, l3, -u1, m2, u3),
-                    wigner3j(l1, l2, j3, u1, -u2, m3)},
-                   l1 + l2 + l3 + u1 + u2 + u3,
-                   lst{u1, u2, u3},
-                   wigner3j(j1, j2, j3, m1, m2, m3) * wigner6j(j1, j2, j3, l1, l2, l3)));
+    out.push_back(make_move(
+        "triangle to 3j times 6j", "DLMF 34.5.23",
+        {wigner3j(j1, l2, l3, m1, u2, -u3), wigner3j(l1, j2, l3, -u1, m2, u3), wigner3j(l1, l2, j3, u1, -u2, m3)},
+        l1 + l2 + l3 + u1 + u2 + u3, lst{u1, u2, u3},
+        wigner3j(j1, j2, j3, m1, m2, m3) * wigner6j(j1, j2, j3, l1, l2, l3)));
 
     // Two vertices joined by two lines: 3j orthogonality.
     out.push_back(make_move("bubble to a delta", "DLMF 34.3.16",
-                   {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, j2, k3, m1, m2, n3)},
-                   0,
-                   lst{m1, m2},
-                   kdelta(j3, k3) * kdelta(m3, n3) * triangle(j1, j2, j3) / (2 * j3 + 1)));
+                            {wigner3j(j1, j2, j3, m1, m2, m3), wigner3j(j1, j2, k3, m1, m2, n3)}, 0, lst{m1, m2},
+                            kdelta(j3, k3) * kdelta(m3, n3) * triangle(j1, j2, j3) / (2 * j3 + 1)));
 
     // A line from a vertex back to itself: the metric is sqrt(2j+1) times the 3j with a zero
     // entry, and orthogonality closes the loop (DLMF 34.3.16 with 34.3.1's (j j 0) value).
-    out.push_back(make_move("loop to a delta", "DLMF 34.3.16 with 34.3.1",
-                   {wigner3j(j1, j1, c, m1, -m1, g)},
-                   j1 - m1,
-                   lst{m1},
-                   // tri(j1, j1, c) is 1 where c = 0, but it keeps the consumed triad for the
-                   // phase group: (-1)^c is an integer power because 2 j1 + c is an integer.
-                   sqrt(2 * j1 + 1) * kdelta(c, 0) * kdelta(g, 0) * triangle(j1, j1, c)));
+    out.push_back(make_move("loop to a delta", "DLMF 34.3.16 with 34.3.1", {wigner3j(j1, j1, c, m1, -m1, g)}, j1 - m1,
+                            lst{m1},
+                            // tri(j1, j1, c) is 1 where c = 0, but it keeps the consumed triad for the
+                            // phase group: (-1)^c is an integer power because 2 j1 + c is an integer.
+                            sqrt(2 * j1 + 1) * kdelta(c, 0) * kdelta(g, 0) * triangle(j1, j1, c)));
     return out;
 }
 

@@ -2,16 +2,16 @@
 
 #include <deque>
 
+#include "canonical/phase_reduction.hpp"
+#include "canonical/symmetries.hpp"
 #include "model/fresh_index.hpp"
 #include "model/normalize.hpp"
 #include "model/symbols.hpp"
 #include "network/cut.hpp"
 #include "network/fixed_projection.hpp"
 #include "network/match.hpp"
-#include "network/term.hpp"
-#include "canonical/symmetries.hpp"
-#include "canonical/phase_reduction.hpp"
 #include "network/rewrites.hpp"
+#include "network/term.hpp"
 
 namespace couplet::network {
 
@@ -282,8 +282,10 @@ private:
         outer_.push_back(s.indices());
         // Not through operator(): expanding (2x+1) would split the term in two.
         ex inner = s.body();
-        if (is_a<index_sum>(inner)) inner = reduce_term(ex_to<index_sum>(inner).body(), ex_to<index_sum>(inner).indices());
-        else inner = (*this)(inner);
+        if (is_a<index_sum>(inner))
+            inner = reduce_term(ex_to<index_sum>(inner).body(), ex_to<index_sum>(inner).indices());
+        else
+            inner = (*this)(inner);
         outer_.pop_back();
         return make_sum(inner, s.indices());
     }

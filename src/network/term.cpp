@@ -139,8 +139,10 @@ bool is_proper_network(const msum_term& t) {
             if (v < 0) continue;
             for (int c = 3; c < 6; ++c) {
                 ex entry = t.threejs[v].op(c);
-                if ((entry - l.projection).expand().is_zero()) signs.push_back(1);
-                else if ((entry + l.projection).expand().is_zero()) signs.push_back(-1);
+                if ((entry - l.projection).expand().is_zero())
+                    signs.push_back(1);
+                else if ((entry + l.projection).expand().is_zero())
+                    signs.push_back(-1);
             }
         }
         if (signs.size() != 2) return false;

@@ -24,8 +24,8 @@ struct msum_term {
     GiNaC::lst summed;
     std::vector<GiNaC::ex> threejs;  // a power 3j^k appears k times
     GiNaC::ex exponent = 0;
-    GiNaC::ex rest = 1;              // free of every summed projection
-    std::vector<line> lines;         // one per summed projection
+    GiNaC::ex rest = 1;                // free of every summed projection
+    std::vector<line> lines;           // one per summed projection
     std::vector<GiNaC::ex> open_ends;  // bottom-row entries without a summed projection
 };
 

@@ -27,10 +27,9 @@ struct sum;
 struct negated;
 struct expression;
 
-struct operand
-    : x3::variant<nil, x3::forward_ast<number>, x3::forward_ast<identifier>, x3::forward_ast<call>,
-                  x3::forward_ast<bracket_symbol>, x3::forward_ast<clebsch_gordan>,
-                  x3::forward_ast<sum>, x3::forward_ast<negated>, x3::forward_ast<expression>> {
+struct operand : x3::variant<nil, x3::forward_ast<number>, x3::forward_ast<identifier>, x3::forward_ast<call>,
+                             x3::forward_ast<bracket_symbol>, x3::forward_ast<clebsch_gordan>, x3::forward_ast<sum>,
+                             x3::forward_ast<negated>, x3::forward_ast<expression>> {
     using base_type::base_type;
     using base_type::operator=;
 };
@@ -111,8 +110,7 @@ struct eval_request : located {
     std::vector<assignment> at;
 };
 
-struct statement : x3::variant<declaration, definition, check_request, eval_request,
-                               simplify_request> {
+struct statement : x3::variant<declaration, definition, check_request, eval_request, simplify_request> {
     using base_type::base_type;
     using base_type::operator=;
 };

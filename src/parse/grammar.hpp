@@ -21,8 +21,7 @@ using skipper_type = std::remove_const_t<decltype(skipper)>;
 
 // The source's first character, so that rules can record byte offsets in the AST.
 struct source_begin_tag;
-using context_type =
-    x3::context<source_begin_tag, const iterator_type, x3::phrase_parse_context<skipper_type>::type>;
+using context_type = x3::context<source_begin_tag, const iterator_type, x3::phrase_parse_context<skipper_type>::type>;
 
 struct statement_class;
 using statement_type = x3::rule<statement_class, ast::statement>;

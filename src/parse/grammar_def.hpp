@@ -69,11 +69,10 @@ using x3::lit;
 
 auto const word_end = !(x3::alnum | '_' | '\'');
 inline auto kw(char const* k) { return lexeme[lit(k) >> word_end]; }
-auto const reserved = kw("int") | kw("half") | kw("let") | kw("simplify") | kw("check") |
-                      kw("eval") | kw("at") | kw("sum");
+auto const reserved =
+    kw("int") | kw("half") | kw("let") | kw("simplify") | kw("check") | kw("eval") | kw("at") | kw("sum");
 
-auto const name_text_def = x3::raw[lexeme[(x3::alpha | char_('_')) >> *(x3::alnum | char_('_')) >>
-                                          *char_('\'')]];
+auto const name_text_def = x3::raw[lexeme[(x3::alpha | char_('_')) >> *(x3::alnum | char_('_')) >> *char_('\'')]];
 auto const identifier_def = !reserved >> name_text;
 auto const number_def = lexeme[+x3::digit];
 
@@ -83,8 +82,8 @@ auto const unary_def = negated | power;
 auto const negated_def = lit('-') > unary;
 // The exponent is a unary, so a^b^c groups as a^(b^c) and a^-b is accepted.
 auto const power_def = primary >> *(char_('^') > unary);
-auto const primary_def = round_symbol | curly_symbol | clebsch_gordan | sum | number | call |
-                         identifier | parenthesized;
+auto const primary_def =
+    round_symbol | curly_symbol | clebsch_gordan | sum | number | call | identifier | parenthesized;
 auto const parenthesized_def = lit('(') > expression > ')';
 
 auto const args_def = expression % ',';
@@ -93,8 +92,7 @@ auto const call_def = identifier >> '(' > args > ')';
 auto const row_def = expression % ',';
 auto const rows_def = row % ';';
 auto const round_symbol_def = lexeme[x3::string("3j") >> word_end] > '(' > rows > ')';
-auto const curly_symbol_def =
-    lexeme[(x3::string("6j") | x3::string("9j")) >> word_end] > '{' > rows > '}';
+auto const curly_symbol_def = lexeme[(x3::string("6j") | x3::string("9j")) >> word_end] > '{' > rows > '}';
 
 // Entries of <j1 m1, j2 m2 | J M> are separated by blanks, so each must be an atom.
 auto const cg_negated_def = lit('-') > cg_atom;
@@ -102,15 +100,13 @@ auto const number_operand_def = number;
 auto const cg_divisor_def = char_('/') > number_operand;
 auto const cg_number_def = number_operand >> x3::repeat(0, 1)[cg_divisor];
 auto const cg_atom_def = cg_negated | cg_number | identifier | parenthesized;
-auto const clebsch_gordan_def = lit('<') > cg_atom > cg_atom > ',' > cg_atom > cg_atom > '|' >
-                                cg_atom > cg_atom > '>';
+auto const clebsch_gordan_def = lit('<') > cg_atom > cg_atom > ',' > cg_atom > cg_atom > '|' > cg_atom > cg_atom > '>';
 
 auto const index_list_def = identifier % ',';
 auto const sum_def = kw("sum") > '(' > index_list > ':' > expression > ')';
 
 auto const name_list_def = identifier % ',';
-auto const declaration_def =
-    lexeme[(x3::string("int") | x3::string("half")) >> word_end] > name_list;
+auto const declaration_def = lexeme[(x3::string("int") | x3::string("half")) >> word_end] > name_list;
 auto const definition_def = kw("let") > identifier > '=' > expression;
 auto const check_request_def = kw("check") > expression > "==" > expression;
 auto const assignment_def = identifier > '=' > expression;
@@ -122,16 +118,14 @@ auto const bare_check_def = expression >> "==" > expression;
 auto const bare_eval_def = expression >> kw("at") > assignment_list;
 auto const bare_expression_def = expression;
 auto const end_of_statement_def = x3::eoi;
-auto const statement_rule_def = (declaration | definition | check_request | eval_request |
-                                 simplify_request | bare_check | bare_eval | bare_expression) >
-                                end_of_statement;
+auto const statement_rule_def = (declaration | definition | check_request | eval_request | simplify_request |
+                                 bare_check | bare_eval | bare_expression) > end_of_statement;
 
-BOOST_SPIRIT_DEFINE(identifier, name_text, number, expression, multiplicative, power, unary,
-                    negated, primary, parenthesized, args, call, row, rows, round_symbol,
-                    curly_symbol, cg_atom, cg_negated, cg_number, number_operand, cg_divisor, clebsch_gordan, index_list, sum,
-                    name_list, declaration, definition, check_request, assignment, assignment_list,
-                    eval_request, simplify_request, bare_check, bare_eval, bare_expression,
-                    end_of_statement)
+BOOST_SPIRIT_DEFINE(identifier, name_text, number, expression, multiplicative, power, unary, negated, primary,
+                    parenthesized, args, call, row, rows, round_symbol, curly_symbol, cg_atom, cg_negated, cg_number,
+                    number_operand, cg_divisor, clebsch_gordan, index_list, sum, name_list, declaration, definition,
+                    check_request, assignment, assignment_list, eval_request, simplify_request, bare_check, bare_eval,
+                    bare_expression, end_of_statement)
 BOOST_SPIRIT_DEFINE(statement_rule)
 
 }  // namespace couplet::parser

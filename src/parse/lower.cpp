@@ -15,7 +15,6 @@ using namespace GiNaC;
 
 namespace {
 
-
 std::size_t offset_of(const ast::operand& o);
 
 struct offset_visitor : boost::static_visitor<std::size_t> {
@@ -49,8 +48,7 @@ public:
         lowered_statement s;
         s.span = p.span;
         s.text = src_.text().substr(p.span.begin, p.span.end - p.span.begin);
-        while (!s.text.empty() && std::isspace(static_cast<unsigned char>(s.text.back())))
-            s.text.pop_back();
+        while (!s.text.empty() && std::isspace(static_cast<unsigned char>(s.text.back()))) s.text.pop_back();
         boost::apply_visitor([&](const auto& node) { this->fill(s, node); }, p.tree);
         return s;
     }
@@ -62,11 +60,11 @@ private:
         s.kind = request_kind::declaration;
         for (const ast::identifier& n : d.names) {
             if (definitions_.count(n.name) || later_definitions_.count(n.name))
-                throw user_error(n.offset, "'" + n.name + "' is defined by 'let'; it cannot be "
-                                                            "declared '" + d.parity + "'");
-            out_.numbers.declare_parity(n.name, d.parity == "int" ? qn_parity::integer
-                                                                  : qn_parity::half_odd,
-                                        n.offset);
+                throw user_error(n.offset, "'" + n.name +
+                                               "' is defined by 'let'; it cannot be "
+                                               "declared '" +
+                                               d.parity + "'");
+            out_.numbers.declare_parity(n.name, d.parity == "int" ? qn_parity::integer : qn_parity::half_odd, n.offset);
         }
     }
 
@@ -75,8 +73,10 @@ private:
         if (definitions_.count(d.name.name))
             throw user_error(d.name.offset, "'" + d.name.name + "' is already defined");
         if (const quantum_number* q = out_.numbers.find(d.name.name))
-            throw user_error(d.name.offset, "'" + d.name.name + "' is already used as a quantum "
-                                            "number (first at " + where(q->first_offset) + ")");
+            throw user_error(d.name.offset, "'" + d.name.name +
+                                                "' is already used as a quantum "
+                                                "number (first at " +
+                                                where(q->first_offset) + ")");
         later_definitions_.erase(d.name.name);
         s.name = d.name.name;
         s.value = expression(d.value);
@@ -103,8 +103,7 @@ private:
         for (const ast::assignment& a : r.at) {
             const quantum_number* q = out_.numbers.find(a.name.name);
             if (!q || !present.count(q->symbol))
-                throw user_error(a.name.offset,
-                                 "'" + a.name.name + "' does not occur in the expression to evaluate");
+                throw user_error(a.name.offset, "'" + a.name.name + "' does not occur in the expression to evaluate");
             // A copy: lowering the value can add names to the table and move its entries.
             const symbol assigned = q->symbol;
             for (const value_assignment& earlier : s.at)
@@ -112,8 +111,8 @@ private:
                     throw user_error(a.name.offset, "'" + a.name.name + "' is assigned twice");
             ex v = expression(a.value);
             if (!is_a<numeric>(v) || !ex_to<numeric>(v).is_rational())
-                throw user_error(a.value.offset, "the value of '" + a.name.name +
-                                                     "' must be a number like 1, -2 or 3/2");
+                throw user_error(a.value.offset,
+                                 "the value of '" + a.name.name + "' must be a number like 1, -2 or 3/2");
             s.at.push_back({assigned, ex_to<numeric>(v), a.value.offset});
         }
         for (const value_assignment& a : s.at) check_admissible(a, s.at);
@@ -158,9 +157,15 @@ private:
         for (const ast::operation& op : e.rest) {
             ex rhs = operand(op.rhs);
             switch (op.op) {
-                case '+': value = value + rhs; break;
-                case '-': value = value - rhs; break;
-                case '*': value = value * rhs; break;
+                case '+':
+                    value = value + rhs;
+                    break;
+                case '-':
+                    value = value - rhs;
+                    break;
+                case '*':
+                    value = value * rhs;
+                    break;
                 case '/':
                     if (rhs.is_zero()) throw user_error(offset_of(op.rhs), "division by zero");
                     value = value / rhs;
@@ -173,19 +178,20 @@ private:
     ex power_of(const ex& base, const ex& exponent, std::size_t exponent_offset) {
         if (base.is_equal(-1)) {
             if (!is_linear_form(exponent))
-                throw user_error(exponent_offset, "the exponent of (-1) must be linear in the quantum "
-                                                  "numbers, like j1+j2-m or 2*j");
+                throw user_error(exponent_offset,
+                                 "the exponent of (-1) must be linear in the quantum "
+                                 "numbers, like j1+j2-m or 2*j");
             return make_phase(exponent);
         }
         if (!is_a<numeric>(exponent) || !ex_to<numeric>(exponent).is_rational())
-            throw user_error(exponent_offset, "only (-1) may be raised to a symbolic power; for a "
-                                              "phase write (-1)^(...) with the parentheses");
+            throw user_error(exponent_offset,
+                             "only (-1) may be raised to a symbolic power; for a "
+                             "phase write (-1)^(...) with the parentheses");
         numeric n = ex_to<numeric>(exponent);
         if (abs(n) > max_integer_exponent)
-            throw user_error(exponent_offset, "exponent too large (at most " +
-                                                  std::to_string(max_integer_exponent) + " in size)");
-        if (base.is_zero() && !n.is_pos_integer())
-            throw user_error(exponent_offset, "division by zero");
+            throw user_error(exponent_offset,
+                             "exponent too large (at most " + std::to_string(max_integer_exponent) + " in size)");
+        if (base.is_zero() && !n.is_pos_integer()) throw user_error(exponent_offset, "division by zero");
         if (is_a<numeric>(base) && ex_to<numeric>(base).is_negative() && !n.is_integer())
             throw user_error(exponent_offset, "a fractional power of a negative number is not real");
         return pow(base, exponent);
@@ -201,16 +207,14 @@ private:
 
     ex node(const ast::number& n) {
         if (n.digits.size() > max_number_digits)
-            throw user_error(n.offset, "number too long (at most " + std::to_string(max_number_digits) +
-                                           " digits)");
+            throw user_error(n.offset, "number too long (at most " + std::to_string(max_number_digits) + " digits)");
         return numeric(n.digits.c_str());
     }
 
     ex node(const ast::identifier& id) {
         if (auto it = definitions_.find(id.name); it != definitions_.end()) return it->second;
         if (auto it = later_definitions_.find(id.name); it != later_definitions_.end())
-            throw user_error(id.offset, "'" + id.name + "' is used before its definition at " +
-                                            where(it->second));
+            throw user_error(id.offset, "'" + id.name + "' is used before its definition at " + where(it->second));
         return out_.numbers.symbol_for(id.name, id.offset);
     }
 
@@ -238,8 +242,7 @@ private:
             return triangle(slot(c.args[0], qn_role::angular), slot(c.args[1], qn_role::angular),
                             slot(c.args[2], qn_role::angular));
         }
-        throw user_error(c.function.offset, "unknown function '" + f +
-                                                "'; the functions are sqrt, delta and tri");
+        throw user_error(c.function.offset, "unknown function '" + f + "'; the functions are sqrt, delta and tri");
     }
 
     ex node(const ast::bracket_symbol& b) {
@@ -249,15 +252,13 @@ private:
                                               : "9j{a, b, c; d, e, f; g, h, i}";
         if (b.rows.size() != want_rows)
             throw user_error(b.offset, "a " + b.kind + " symbol has " + std::to_string(want_rows) +
-                                           " rows of 3 entries separated by ';', like " + layout +
-                                           "; found " + std::to_string(b.rows.size()) + " row" +
-                                           (b.rows.size() == 1 ? "" : "s"));
+                                           " rows of 3 entries separated by ';', like " + layout + "; found " +
+                                           std::to_string(b.rows.size()) + " row" + (b.rows.size() == 1 ? "" : "s"));
         for (std::size_t r = 0; r < b.rows.size(); ++r)
             if (b.rows[r].size() != 3)
-                throw user_error(b.rows[r].front().offset,
-                                 "row " + std::to_string(r + 1) + " of this " + b.kind + " has " +
-                                     std::to_string(b.rows[r].size()) + " entries; every row has 3, like " +
-                                     layout);
+                throw user_error(b.rows[r].front().offset, "row " + std::to_string(r + 1) + " of this " + b.kind +
+                                                               " has " + std::to_string(b.rows[r].size()) +
+                                                               " entries; every row has 3, like " + layout);
         if (b.kind == "3j") {
             exvector j, m;
             for (const auto& e : b.rows[0]) j.push_back(slot(e, qn_role::angular));
@@ -272,8 +273,7 @@ private:
     }
 
     ex node(const ast::clebsch_gordan& c) {
-        ex j1 = slot(c.j1, qn_role::angular), j2 = slot(c.j2, qn_role::angular),
-           j = slot(c.j, qn_role::angular);
+        ex j1 = slot(c.j1, qn_role::angular), j2 = slot(c.j2, qn_role::angular), j = slot(c.j, qn_role::angular);
         ex m1 = projection_slot(c.m1, j1), m2 = projection_slot(c.m2, j2), m = projection_slot(c.m, j);
         return clebsch(j1, m1, j2, m2, j, m);
     }
@@ -282,8 +282,9 @@ private:
         lst indices;
         for (const ast::identifier& i : s.indices) {
             if (definitions_.count(i.name) || later_definitions_.count(i.name))
-                throw user_error(i.offset, "'" + i.name + "' is defined by 'let' and cannot be a "
-                                                          "summation index");
+                throw user_error(i.offset, "'" + i.name +
+                                               "' is defined by 'let' and cannot be a "
+                                               "summation index");
             symbol sym = out_.numbers.symbol_for(i.name, i.offset);
             for (const ex& earlier : indices)
                 if (earlier.is_equal(sym))
@@ -293,8 +294,8 @@ private:
         ex body = expression(s.body);
         for (std::size_t k = 0; k < indices.nops(); ++k)
             if (!body.has(indices.op(k)))
-                throw user_error(s.indices[k].offset, "summation index '" + s.indices[k].name +
-                                                          "' does not occur in the body of the sum");
+                throw user_error(s.indices[k].offset,
+                                 "summation index '" + s.indices[k].name + "' does not occur in the body of the sum");
         return make_sum(body, indices);
     }
 
@@ -305,8 +306,9 @@ private:
         ex value = lower_any(node);
         std::size_t at = offset_of_node(node);
         if (!is_linear_form(value))
-            throw user_error(at, "entries of coupling symbols must be linear in the quantum numbers, "
-                                 "like j1+1/2, -m or J-1");
+            throw user_error(at,
+                             "entries of coupling symbols must be linear in the quantum numbers, "
+                             "like j1+1/2, -m or J-1");
         if (role != qn_role::unknown)
             for (const symbol& s : symbols_in(value)) out_.numbers.assign_role(s, role, at);
         return value;
@@ -332,9 +334,8 @@ private:
 
     static bool starts_with_keyword(const std::string& text, const std::string& keyword) {
         return text.compare(0, keyword.size(), keyword) == 0 &&
-               (text.size() == keyword.size() ||
-                !(std::isalnum(static_cast<unsigned char>(text[keyword.size()])) ||
-                  text[keyword.size()] == '_' || text[keyword.size()] == '\''));
+               (text.size() == keyword.size() || !(std::isalnum(static_cast<unsigned char>(text[keyword.size()])) ||
+                                                   text[keyword.size()] == '_' || text[keyword.size()] == '\''));
     }
 
     static std::string to_text(const numeric& n) {

@@ -27,11 +27,11 @@ struct value_assignment {
 struct lowered_statement {
     request_kind kind = request_kind::simplify;
     statement_span span;
-    std::string text;      // the statement's source text
-    bool bare = false;     // an expression or `A == B` without a keyword
-    std::string name;      // definition: the name it defines
-    GiNaC::ex value;       // simplify / eval / check left side / definition value
-    GiNaC::ex rhs;         // check right side
+    std::string text;                  // the statement's source text
+    bool bare = false;                 // an expression or `A == B` without a keyword
+    std::string name;                  // definition: the name it defines
+    GiNaC::ex value;                   // simplify / eval / check left side / definition value
+    GiNaC::ex rhs;                     // check right side
     std::vector<value_assignment> at;  // eval ... at
 };
 

@@ -1,8 +1,8 @@
 #include <boost/spirit/home/x3.hpp>
 #include <string>
 
-#include "parse/parse.hpp"
 #include "parse/grammar.hpp"
+#include "parse/parse.hpp"
 
 namespace couplet {
 namespace {
@@ -40,13 +40,13 @@ ast::statement parse_one(const source_file& src, statement_span span) {
         auto const grammar = x3::with<parser::source_begin_tag>(begin)[parser::statement()];
         if (!x3::phrase_parse(first, last, grammar, parser::skipper, tree)) {
             std::size_t at = skip_blanks(text, span.begin, span.end);
-            throw user_error(at, "unexpected " + describe_found(text, at, span.end) +
-                                     "; expected a statement or an expression");
+            throw user_error(
+                at, "unexpected " + describe_found(text, at, span.end) + "; expected a statement or an expression");
         }
     } catch (const x3::expectation_failure<iterator_type>& e) {
         std::size_t at = skip_blanks(text, static_cast<std::size_t>(e.where() - begin), span.end);
-        throw user_error(at, "expected " + expected_phrase(e.which()) + ", found " +
-                                 describe_found(text, at, span.end));
+        throw user_error(at,
+                         "expected " + expected_phrase(e.which()) + ", found " + describe_found(text, at, span.end));
     }
     return tree;
 }

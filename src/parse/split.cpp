@@ -10,9 +10,12 @@ namespace {
 
 char closer_for(char opener) {
     switch (opener) {
-        case '(': return ')';
-        case '{': return '}';
-        default: return '>';
+        case '(':
+            return ')';
+        case '{':
+            return '}';
+        default:
+            return '>';
     }
 }
 
@@ -58,8 +61,8 @@ public:
         }
         if (!open_.empty()) {
             std::size_t at = open_.back();
-            throw user_error(at, std::string("unclosed '") + text_[at] + "': expected '" +
-                                     closer_for(text_[at]) + "' before the end of the input");
+            throw user_error(at, std::string("unclosed '") + text_[at] + "': expected '" + closer_for(text_[at]) +
+                                     "' before the end of the input");
         }
         finish(text_.size());
         return spans_;
@@ -68,14 +71,14 @@ public:
 private:
     void check_depth(std::size_t at) const {
         if (open_.size() + exponents_ + prefix_run_ > max_nesting)
-            throw user_error(at, "expression nested too deeply (brackets, '^' and prefix '-' "
-                                 "together may nest at most " + std::to_string(max_nesting) +
-                                 " levels)");
+            throw user_error(at,
+                             "expression nested too deeply (brackets, '^' and prefix '-' "
+                             "together may nest at most " +
+                                 std::to_string(max_nesting) + " levels)");
     }
 
     void close(std::size_t at, char c) {
-        if (open_.empty())
-            throw user_error(at, std::string("unmatched '") + c + "'");
+        if (open_.empty()) throw user_error(at, std::string("unmatched '") + c + "'");
         char opener = text_[open_.back()];
         if (closer_for(opener) != c)
             throw user_error(at, std::string("'") + c + "' does not match the '" + opener +

@@ -76,8 +76,7 @@ int_vector to_int_vector(const big_vector& v) {
 }  // namespace
 
 std::int64_t to_int64(const cln::cl_I& x) {
-    if (cln::integer_length(x) > 62)
-        throw std::overflow_error("phase: lattice entry too large for 64-bit arithmetic");
+    if (cln::integer_length(x) > 62) throw std::overflow_error("phase: lattice entry too large for 64-bit arithmetic");
     return cln::cl_I_to_long(x);
 }
 

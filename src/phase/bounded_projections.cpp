@@ -35,9 +35,12 @@ std::optional<integer_constraint> to_row(const rational_form& f, bool exact, std
 }
 
 bool holds_on(const integer_constraint& c, const affine_lattice& points, std::size_t n) {
-    auto fits = [&](const cln::cl_I& s) { return cln::zerop(c.modulus) ? cln::zerop(s) : cln::zerop(cln::mod(s, c.modulus)); };
+    auto fits = [&](const cln::cl_I& s) {
+        return cln::zerop(c.modulus) ? cln::zerop(s) : cln::zerop(cln::mod(s, c.modulus));
+    };
     cln::cl_I at_origin = c.row[n];
-    for (std::size_t i = 0; i < n; ++i) at_origin = at_origin + c.row[i] * cln::cl_I(static_cast<long>(points.origin[i]));
+    for (std::size_t i = 0; i < n; ++i)
+        at_origin = at_origin + c.row[i] * cln::cl_I(static_cast<long>(points.origin[i]));
     if (!fits(at_origin)) return false;
     for (const auto& b : points.basis) {
         cln::cl_I along = 0;

@@ -44,8 +44,7 @@ void add_parity_constraint(std::vector<linear_form>& integer_forms, const std::s
 void context::declare_angular(const std::string& name, parity p) {
     if (auto it = index_.find(name); it != index_.end()) {
         variable_info& info = info_[it->second];
-        if (info.projection)
-            throw std::invalid_argument("phase: '" + name + "' is already a projection");
+        if (info.projection) throw std::invalid_argument("phase: '" + name + "' is already a projection");
         if (info.par == p || p == parity::unknown) return;
         if (info.par != parity::unknown)
             throw std::invalid_argument("phase: '" + name + "' was declared with the other parity");
@@ -76,9 +75,7 @@ void context::add_triad(const linear_form& a, const linear_form& b, const linear
     invalidate();
 }
 
-void context::add_zero_sum(const linear_form& a, const linear_form& b, const linear_form& c) {
-    add_zero(a + b + c);
-}
+void context::add_zero_sum(const linear_form& a, const linear_form& b, const linear_form& c) { add_zero(a + b + c); }
 
 void context::add_integer(const linear_form& x) {
     declare_names_in(x);

@@ -84,8 +84,8 @@ const detail::phase_lattice& context::lattice() const {
             geometry.angular.push_back(i);
     }
     for (const auto& t : triads_)
-        geometry.triads.push_back({detail::to_doubled(t[0], index_), detail::to_doubled(t[1], index_),
-                                   detail::to_doubled(t[2], index_)});
+        geometry.triads.push_back(
+            {detail::to_doubled(t[0], index_), detail::to_doubled(t[1], index_), detail::to_doubled(t[2], index_)});
     lattice_ = std::make_shared<detail::phase_lattice>(names_.size(), std::move(rows), std::move(geometry));
     return *lattice_;
 }
@@ -170,8 +170,7 @@ linear_form context::canonical(const linear_form& x) const {
     // as the form's own (exotic denominators; there the choice may depend on the input).
     constexpr std::int64_t largest_searched_level = 8;
     std::vector<std::int64_t> levels;
-    for (std::int64_t level = 1; level <= std::min(s.level, largest_searched_level); ++level)
-        levels.push_back(level);
+    for (std::int64_t level = 1; level <= std::min(s.level, largest_searched_level); ++level) levels.push_back(level);
     if (s.level > largest_searched_level) levels.push_back(s.level);
     for (std::int64_t level : levels) {
         std::optional<int_vector> w;
@@ -190,8 +189,7 @@ linear_form context::canonical(const linear_form& x) const {
         }
         const detail::phase_level& at = l.level(level);
         const int_vector& best = detail::readable_representative(at, at.reduce(*w));
-        if (at.signature(best) != at.signature(*w))
-            throw std::logic_error("phase: canonical form changed the phase");
+        if (at.signature(best) != at.signature(*w)) throw std::logic_error("phase: canonical form changed the phase");
         return detail::from_scaled(best, level, names_);
     }
     throw std::logic_error("phase: no level expresses the exponent");

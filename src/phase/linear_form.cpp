@@ -84,8 +84,7 @@ cln::cl_RA linear_form::evaluate(const assignment& values) const {
     cln::cl_RA sum = constant_;
     for (const auto& [name, c] : coefficients_) {
         auto it = values.find(name);
-        if (it == values.end())
-            throw std::out_of_range("phase: no value for variable '" + name + "'");
+        if (it == values.end()) throw std::out_of_range("phase: no value for variable '" + name + "'");
         sum = sum + c * it->second;
     }
     return sum;

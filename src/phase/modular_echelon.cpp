@@ -93,8 +93,7 @@ void modular_echelon::insert_one(int_vector x, std::vector<int_vector>& pending)
         int_vector combined(x.size());
         for (std::size_t i = 0; i < x.size(); ++i) combined[i] = mod(s * pivot[i] + t * x[i], q_);
         int_vector rest(x.size());
-        for (std::size_t i = 0; i < x.size(); ++i)
-            rest[i] = mod((x[c] / g) * pivot[i] - (d / g) * x[i], q_);
+        for (std::size_t i = 0; i < x.size(); ++i) rest[i] = mod((x[c] / g) * pivot[i] - (d / g) * x[i], q_);
         pivot = std::move(combined);
         push_annihilator(pivot, g);
         x = std::move(rest);

@@ -74,7 +74,8 @@ struct packed_vector {
     }
     int_vector unpack(std::size_t size) const {
         int_vector w(size);
-        for (std::size_t i = 0; i < size; ++i) w[i] = static_cast<std::int64_t>(((low >> i) & 1) | (((high >> i) & 1) << 1));
+        for (std::size_t i = 0; i < size; ++i)
+            w[i] = static_cast<std::int64_t>(((low >> i) & 1) | (((high >> i) & 1) << 1));
         return w;
     }
     packed_vector plus(const packed_vector& o) const { return {low ^ o.low, high ^ o.high ^ (low & o.low)}; }

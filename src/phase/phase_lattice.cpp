@@ -17,8 +17,7 @@ std::int64_t mod(__int128 x, std::int64_t q) {
 
 }  // namespace
 
-phase_lattice::phase_lattice(std::size_t n, std::vector<integer_constraint> constraints,
-                             witness_geometry geometry)
+phase_lattice::phase_lattice(std::size_t n, std::vector<integer_constraint> constraints, witness_geometry geometry)
     : n_(n), constraints_(std::move(constraints)), geometry_(std::move(geometry)) {
     points_ = solve_affine_lattice(n_, constraints_);
     for (const auto& c : constraints_) {
@@ -43,8 +42,7 @@ int_vector phase_lattice::signature(const int_vector& w, std::int64_t q) const {
     std::vector<__int128> sum(rank() + 1, 0);
     for (std::size_t i = 0; i <= n_; ++i) {
         if (w[i] == 0) continue;
-        for (std::size_t k = 0; k <= rank(); ++k)
-            sum[k] += static_cast<__int128>(w[i]) * evaluation_[i][k];
+        for (std::size_t k = 0; k <= rank(); ++k) sum[k] += static_cast<__int128>(w[i]) * evaluation_[i][k];
     }
     int_vector out(rank() + 1);
     for (std::size_t k = 0; k <= rank(); ++k) out[k] = mod(sum[k], q);

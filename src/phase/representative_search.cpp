@@ -40,7 +40,9 @@ struct packed_tails {
         bool operator==(const key& o) const { return low == o.low && high == o.high; }
     };
     struct hash {
-        std::size_t operator()(const key& k) const { return std::hash<std::uint64_t>()(k.low * 0x9e3779b97f4a7c15ULL ^ k.high); }
+        std::size_t operator()(const key& k) const {
+            return std::hash<std::uint64_t>()(k.low * 0x9e3779b97f4a7c15ULL ^ k.high);
+        }
     };
     static bool fits(std::int64_t q, std::size_t width) { return q == 4 && width <= 64; }
     key make(const int_vector& tail) const {
@@ -51,9 +53,7 @@ struct packed_tails {
         }
         return k;
     }
-    key add(const key& a, const key& b) const {
-        return {a.low ^ b.low, a.high ^ b.high ^ (a.low & b.low)};
-    }
+    key add(const key& a, const key& b) const { return {a.low ^ b.low, a.high ^ b.high ^ (a.low & b.low)}; }
     key subtract(const key& a, const key& b) const { return add(a, {b.low, b.high ^ b.low}); }
     bool is_zero(const key& k) const { return k.low == 0 && k.high == 0; }
 };
@@ -139,8 +139,7 @@ private:
 };
 
 // The form with the given terms whose constant makes its signature `target`.
-int_vector assemble(const phase_level& level, const small_term* terms, std::size_t count,
-                    const int_vector& target) {
+int_vector assemble(const phase_level& level, const small_term* terms, std::size_t count, const int_vector& target) {
     const std::int64_t q = level.modulus();
     int_vector w(level.variables() + 1, 0);
     std::int64_t head = 0;

@@ -30,8 +30,7 @@ scaled_form to_scaled(const linear_form& x, const std::map<std::string, std::siz
     scaled_form out;
     out.level = to_int64(level);
     out.w.assign(index.size() + 1, 0);
-    for (const auto& [name, c] : x.coefficients())
-        out.w[index_of(name, index)] = to_int64(cln::numerator(c * level));
+    for (const auto& [name, c] : x.coefficients()) out.w[index_of(name, index)] = to_int64(cln::numerator(c * level));
     out.w.back() = to_int64(cln::numerator(cln::cl_RA(2) * x.constant() * level));
     return out;
 }

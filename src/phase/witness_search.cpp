@@ -115,8 +115,7 @@ double inequality_violation(const witness_geometry& geometry, const int_vector& 
     return violation;
 }
 
-int_vector polish_witness(const phase_lattice& lattice, int_vector start, const int_vector& w,
-                          std::int64_t modulus) {
+int_vector polish_witness(const phase_lattice& lattice, int_vector start, const int_vector& w, std::int64_t modulus) {
     const witness_geometry& geometry = lattice.geometry();
     int_vector current = std::move(start);
     auto current_cost = witness_cost(geometry, current);

@@ -12,8 +12,7 @@
 
 namespace couplet::phase::detail {
 
-int_vector polish_witness(const phase_lattice& lattice, int_vector start, const int_vector& w,
-                          std::int64_t modulus);
+int_vector polish_witness(const phase_lattice& lattice, int_vector start, const int_vector& w, std::int64_t modulus);
 
 // How far u is from satisfying the inequalities of the geometry (0 when it does).
 double inequality_violation(const witness_geometry& geometry, const int_vector& u);

@@ -6,18 +6,17 @@
 
 #include "exact/number.hpp"
 #include "model/symbols.hpp"
-#include "print/print.hpp"
 #include "print/latex_width.hpp"
+#include "print/print.hpp"
 #include "print/writer.hpp"
 
 namespace couplet {
 
 std::string latex_identifier(const std::string& name) {
     static const std::set<std::string> greek = {
-        "alpha", "beta", "gamma", "delta", "epsilon", "zeta", "eta", "theta", "iota", "kappa",
-        "lambda", "mu", "nu", "xi", "pi", "rho", "sigma", "tau", "upsilon", "phi", "chi", "psi",
-        "omega", "Gamma", "Delta", "Theta", "Lambda", "Xi", "Pi", "Sigma", "Upsilon", "Phi", "Psi",
-        "Omega"};
+        "alpha", "beta",  "gamma",  "delta", "epsilon", "zeta",  "eta",     "theta", "iota", "kappa", "lambda", "mu",
+        "nu",    "xi",    "pi",     "rho",   "sigma",   "tau",   "upsilon", "phi",   "chi",  "psi",   "omega",  "Gamma",
+        "Delta", "Theta", "Lambda", "Xi",    "Pi",      "Sigma", "Upsilon", "Phi",   "Psi",  "Omega"};
     std::size_t i = 0;
     auto run = [&](auto pred) {
         std::size_t start = i;
@@ -36,13 +35,15 @@ std::string latex_identifier(const std::string& name) {
         // Anything else is shown literally, with the only TeX-special character escaped.
         std::string safe;
         for (char c : name)
-            if (std::isalnum(static_cast<unsigned char>(c)) || c == '\'') safe += c;
-            else if (c == '_') safe += "\\_";
+            if (std::isalnum(static_cast<unsigned char>(c)) || c == '\'')
+                safe += c;
+            else if (c == '_')
+                safe += "\\_";
         return "\\mathit{" + safe + "}";
     }
     // Every context that follows a name is punctuation, a brace or a space, so a command like
     // \lambda needs no trailing blank.
-    std::string out = greek.count(letters) ? "\\" + letters
+    std::string out = greek.count(letters)  ? "\\" + letters
                       : letters.size() == 1 ? letters
                                             : "\\mathit{" + letters + "}";
     std::string sub = digits;
@@ -81,28 +82,29 @@ protected:
         return {at_least(base, level::atom) + "^{" + os.str() + "}", level::power};
     }
     printed root(const ex& radicand) override { return {"\\sqrt{" + write(radicand).text + "}", level::atom}; }
-    printed phase(const ex& exponent) override {
-        return {"(-1)^{" + write(exponent).text + "}", level::power};
-    }
+    printed phase(const ex& exponent) override { return {"(-1)^{" + write(exponent).text + "}", level::power}; }
 
     printed function(const ex& f) override {
         switch (kind_of(f)) {
-            case symbol_kind::threej: return {matrix(f, "pmatrix"), level::atom};
+            case symbol_kind::threej:
+                return {matrix(f, "pmatrix"), level::atom};
             case symbol_kind::sixj:
-            case symbol_kind::ninej: return {matrix(f, "Bmatrix"), level::atom};
+            case symbol_kind::ninej:
+                return {matrix(f, "Bmatrix"), level::atom};
             case symbol_kind::delta:
                 return {"\\delta_{" + write(f.op(0)).text + "," + write(f.op(1)).text + "}", level::atom};
             // The triangle condition as the trade writes the condition, {a b c}, not as Racah's
             // coefficient Delta(abc) (DLMF 34.2.5), which is a different number.
             case symbol_kind::triangle:
-                return {"\\{" + write(f.op(0)).text + "\\, " + write(f.op(1)).text + "\\, " +
-                            write(f.op(2)).text + "\\}",
-                        level::atom};
-            default: break;
+                return {
+                    "\\{" + write(f.op(0)).text + "\\, " + write(f.op(1)).text + "\\, " + write(f.op(2)).text + "\\}",
+                    level::atom};
+            default:
+                break;
         }
         auto entry = [&](size_t i) { return at_least(f.op(i), level::product); };
-        return {"\\langle " + entry(0) + "\\, " + entry(1) + ", " + entry(2) + "\\, " + entry(3) +
-                    " \\mid " + entry(4) + "\\, " + entry(5) + "\\rangle",
+        return {"\\langle " + entry(0) + "\\, " + entry(1) + ", " + entry(2) + "\\, " + entry(3) + " \\mid " +
+                    entry(4) + "\\, " + entry(5) + "\\rangle",
                 level::atom};
     }
 
@@ -157,8 +159,8 @@ private:
             product_parts p = split_product(t);
             std::string lead;
             if (!p.bottom.empty() || p.denominator != 1) {
-                printed bottom = p.bottom.empty() ? number(p.denominator)
-                                                  : printed{join(p.bottom, p.denominator), level::product};
+                printed bottom =
+                    p.bottom.empty() ? number(p.denominator) : printed{join(p.bottom, p.denominator), level::product};
                 lead = fraction(p.numerator == 1 ? "1" : number(p.numerator).text, bottom, bottom.binding).text;
             } else if (p.numerator != 1) {
                 lead = number(p.numerator).text;
@@ -227,8 +229,10 @@ std::string exact_to_latex(const exact::number& value) {
         }
         bottom << a.denom();
         std::string term = a.denom() == 1 ? top.str() : "\\frac{" + top.str() + "}{" + bottom.str() + "}";
-        if (out.empty()) out = q.is_negative() ? "-" + term : term;
-        else out += (q.is_negative() ? " - " : " + ") + term;
+        if (out.empty())
+            out = q.is_negative() ? "-" + term : term;
+        else
+            out += (q.is_negative() ? " - " : " + ") + term;
     }
     return out;
 }

@@ -42,8 +42,10 @@ void flow(const std::vector<latex_piece>& side, const std::string& opening, doub
         std::string text = p.text;
         if (!line_has_piece && line.compare(0, indent.size(), indent) == 0) {
             // A new line inside a product says so; a term's sign needs {} to stay a binary sign.
-            if (!p.starts_term) text = "\\times " + text, used += 1.3;
-            else if (text[0] == '+' || text[0] == '-') text = "{}" + text;
+            if (!p.starts_term)
+                text = "\\times " + text, used += 1.3;
+            else if (text[0] == '+' || text[0] == '-')
+                text = "{}" + text;
         }
         line += (line_has_piece || !opening.empty() || line != "" ? " " : "") + text;
         used += w + 0.3;
@@ -83,8 +85,10 @@ std::string layout_display(const display_formula& f, display_style style, double
         flow(f.sides[k], opening, width_em, lines);
     }
     for (const std::string& n : f.notes) {
-        if (latex_width(lines.back()) + latex_width(n) <= width_em) lines.back() += n;
-        else lines.push_back(n);
+        if (latex_width(lines.back()) + latex_width(n) <= width_em)
+            lines.back() += n;
+        else
+            lines.push_back(n);
     }
     const bool document = style == display_style::document;
     std::string out = document ? "\\begin{align*}\n" : "\\begin{aligned}\n";
@@ -102,22 +106,50 @@ std::string latex_escaped_text(const std::string& s) {
     for (char c : s) {
         const unsigned char u = static_cast<unsigned char>(c);
         switch (c) {
-            case '\\': out += "\\textbackslash{}"; break;
-            case '{': out += "\\{"; break;
-            case '}': out += "\\}"; break;
-            case '$': out += "\\$"; break;
-            case '&': out += "\\&"; break;
-            case '#': out += "\\#"; break;
-            case '%': out += "\\%"; break;
-            case '_': out += "\\_"; break;
-            case '^': out += "\\^{}"; break;
-            case '~': out += "\\~{}"; break;
-            case '<': out += "\\textless{}"; break;
-            case '>': out += "\\textgreater{}"; break;
-            case '|': out += "\\textbar{}"; break;
+            case '\\':
+                out += "\\textbackslash{}";
+                break;
+            case '{':
+                out += "\\{";
+                break;
+            case '}':
+                out += "\\}";
+                break;
+            case '$':
+                out += "\\$";
+                break;
+            case '&':
+                out += "\\&";
+                break;
+            case '#':
+                out += "\\#";
+                break;
+            case '%':
+                out += "\\%";
+                break;
+            case '_':
+                out += "\\_";
+                break;
+            case '^':
+                out += "\\^{}";
+                break;
+            case '~':
+                out += "\\~{}";
+                break;
+            case '<':
+                out += "\\textless{}";
+                break;
+            case '>':
+                out += "\\textgreater{}";
+                break;
+            case '|':
+                out += "\\textbar{}";
+                break;
             default:
-                if (u >= 0x20 && u < 0x7f) out += c;
-                else if (u >= 0xc0) out += '?';  // one mark per non-ASCII character: only ASCII is safe for every TeX
+                if (u >= 0x20 && u < 0x7f)
+                    out += c;
+                else if (u >= 0xc0)
+                    out += '?';  // one mark per non-ASCII character: only ASCII is safe for every TeX
         }
     }
     return out;

@@ -124,8 +124,10 @@ private:
         }
         if (name == "mathit" || name == "mathrm" || name == "text" || name == "textstyle") return group();
         if (name == "left" || name == "right") {
-            if (i_ < s_.size() && s_[i_] == '\\') command();
-            else ++i_;
+            if (i_ < s_.size() && s_[i_] == '\\')
+                command();
+            else
+                ++i_;
             return bracket;
         }
         if (name == "langle" || name == "rangle") return 0.4;

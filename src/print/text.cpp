@@ -31,23 +31,27 @@ protected:
         return {at_least(base, level::atom) + "^" + e, level::power};
     }
     printed root(const ex& radicand) override { return {"sqrt(" + write(radicand).text + ")", level::atom}; }
-    printed phase(const ex& exponent) override {
-        return {"(-1)^(" + write(exponent).text + ")", level::power};
-    }
+    printed phase(const ex& exponent) override { return {"(-1)^(" + write(exponent).text + ")", level::power}; }
 
     printed function(const ex& f) override {
         switch (kind_of(f)) {
-            case symbol_kind::threej: return {"3j" + rows(f, "(", ")", 3), level::atom};
-            case symbol_kind::sixj: return {"6j" + rows(f, "{", "}", 3), level::atom};
-            case symbol_kind::ninej: return {"9j" + rows(f, "{", "}", 3), level::atom};
-            case symbol_kind::delta: return {"delta" + rows(f, "(", ")", 2), level::atom};
-            case symbol_kind::triangle: return {"tri" + rows(f, "(", ")", 3), level::atom};
-            default: break;
+            case symbol_kind::threej:
+                return {"3j" + rows(f, "(", ")", 3), level::atom};
+            case symbol_kind::sixj:
+                return {"6j" + rows(f, "{", "}", 3), level::atom};
+            case symbol_kind::ninej:
+                return {"9j" + rows(f, "{", "}", 3), level::atom};
+            case symbol_kind::delta:
+                return {"delta" + rows(f, "(", ")", 2), level::atom};
+            case symbol_kind::triangle:
+                return {"tri" + rows(f, "(", ")", 3), level::atom};
+            default:
+                break;
         }
         // <j1 m1, j2 m2 | J M>: blank-separated entries must be atoms.
         auto entry = [&](size_t i) { return cg_entry(f.op(i)); };
-        return {"<" + entry(0) + " " + entry(1) + ", " + entry(2) + " " + entry(3) + " | " + entry(4) +
-                    " " + entry(5) + ">",
+        return {"<" + entry(0) + " " + entry(1) + ", " + entry(2) + " " + entry(3) + " | " + entry(4) + " " + entry(5) +
+                    ">",
                 level::atom};
     }
 
@@ -78,8 +82,7 @@ private:
             magnitude = -e;
             sign = "-";
         }
-        bool atomic = is_a<symbol>(magnitude) ||
-                      (is_a<numeric>(magnitude) && ex_to<numeric>(magnitude).is_rational());
+        bool atomic = is_a<symbol>(magnitude) || (is_a<numeric>(magnitude) && ex_to<numeric>(magnitude).is_rational());
         std::string body = write(magnitude).text;
         return sign + (atomic ? body : parenthesize(body));
     }

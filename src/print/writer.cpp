@@ -4,9 +4,9 @@
 #include <sstream>
 #include <tuple>
 
+#include "model/readable_order.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "model/readable_order.hpp"
 
 namespace couplet::print_detail {
 
@@ -21,20 +21,25 @@ int factor_rank(const ex& f) {
     if (is_a<index_sum>(f)) return 8;
     switch (kind_of(f)) {
         case symbol_kind::delta:
-        case symbol_kind::triangle: return 2;
-        case symbol_kind::clebsch_gordan: return 3;
-        case symbol_kind::threej: return 4;
-        case symbol_kind::sixj: return 5;
-        case symbol_kind::ninej: return 6;
-        default: return 1;
+        case symbol_kind::triangle:
+            return 2;
+        case symbol_kind::clebsch_gordan:
+            return 3;
+        case symbol_kind::threej:
+            return 4;
+        case symbol_kind::sixj:
+            return 5;
+        case symbol_kind::ninej:
+            return 6;
+        default:
+            return 1;
     }
 }
 
 void sort_factors(std::vector<ex>& fs) {
     std::vector<std::pair<std::pair<int, std::string>, ex>> keyed;
     for (const ex& f : fs) keyed.push_back({{factor_rank(f), to_text(f)}, f});
-    std::stable_sort(keyed.begin(), keyed.end(),
-                     [](const auto& a, const auto& b) { return a.first < b.first; });
+    std::stable_sort(keyed.begin(), keyed.end(), [](const auto& a, const auto& b) { return a.first < b.first; });
     fs.clear();
     for (auto& k : keyed) fs.push_back(k.second);
 }
@@ -56,8 +61,7 @@ product_parts split_product(const ex& e) {
     auto take = [&](const ex& f) {
         if (is_a<numeric>(f)) {
             coefficient *= ex_to<numeric>(f);
-        } else if (is_a<GiNaC::power>(f) && is_a<numeric>(f.op(1)) &&
-                   ex_to<numeric>(f.op(1)).is_negative()) {
+        } else if (is_a<GiNaC::power>(f) && is_a<numeric>(f.op(1)) && ex_to<numeric>(f.op(1)).is_negative()) {
             p.bottom.push_back(pow(f.op(0), -f.op(1)));
         } else {
             p.top.push_back(f);
@@ -198,9 +202,8 @@ printed writer::product(const ex& e) {
             bottom = {join_factors(p.bottom, p.denominator), level::product};
         result = fraction(top, bottom, bottom.binding);
     }
-    if (p.negative) result = {"-" + (result.binding >= level::product ? result.text
-                                                                       : parenthesize(result.text)),
-                              level::sum};
+    if (p.negative)
+        result = {"-" + (result.binding >= level::product ? result.text : parenthesize(result.text)), level::sum};
     return result;
 }
 

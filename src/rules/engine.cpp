@@ -7,20 +7,20 @@
 #include <map>
 #include <set>
 
+#include "canonical/phase_reduction.hpp"
+#include "canonical/symmetries.hpp"
+#include "limits/run_limits.hpp"
 #include "model/fresh_index.hpp"
 #include "model/normalize.hpp"
-#include "model/rewrite.hpp"
+#include "model/readable_order.hpp"
 #include "model/result_shape.hpp"
-#include "limits/run_limits.hpp"
+#include "model/rewrite.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "canonical/symmetries.hpp"
 #include "rules/matcher.hpp"
 #include "rules/rewrites.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
-#include "canonical/phase_reduction.hpp"
-#include "model/readable_order.hpp"
 
 namespace couplet::rules {
 
@@ -45,8 +45,8 @@ ex regroup(const ex& body) {
     for (const ex& term : body) {
         ex coefficient = 1, structure = 1;
         for (const ex& f : factors_of(term)) (is_polynomial(f) ? coefficient : structure) *= f;
-        auto it = std::find_if(groups.begin(), groups.end(),
-                               [&](const auto& g) { return g.first.is_equal(structure); });
+        auto it =
+            std::find_if(groups.begin(), groups.end(), [&](const auto& g) { return g.first.is_equal(structure); });
         if (it == groups.end())
             groups.emplace_back(structure, coefficient);
         else

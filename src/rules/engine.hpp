@@ -33,7 +33,7 @@ struct jsum_result {
 // Equal to e at every assignment of its free quantum numbers.
 jsum_result reduce_jsums(const GiNaC::ex& e, const quantum_numbers& numbers);
 
-}  // namespace couplet
+}  // namespace couplet::rules
 
 namespace couplet {
 // Three lines per step: "rule name (reference)", then "  before: ..." and "  after:  ..." in

@@ -60,7 +60,9 @@ private:
 
     // rule's summand); under the same names as they are.
     static std::optional<ex> renamed_into(const ex& term, const index_sum& s, const lst& target, const ex& structure);
-    void record(const identity& used, const ex& before, const ex& after) { trace.push_back(step_by(used, before, after)); }
+    void record(const identity& used, const ex& before, const ex& after) {
+        trace.push_back(step_by(used, before, after));
+    }
     std::optional<ex> step_on_term(const ex& term);
 
     // A symbol equal to minus itself by one of its symmetries, given the parities the term implies.

@@ -6,20 +6,20 @@
 #include <map>
 #include <set>
 
+#include "canonical/phase_reduction.hpp"
+#include "canonical/symmetries.hpp"
+#include "limits/run_limits.hpp"
 #include "model/fresh_index.hpp"
 #include "model/normalize.hpp"
-#include "model/rewrite.hpp"
+#include "model/readable_order.hpp"
 #include "model/result_shape.hpp"
-#include "limits/run_limits.hpp"
+#include "model/rewrite.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "canonical/symmetries.hpp"
 #include "rules/matcher.hpp"
 #include "rules/rewrites.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
-#include "canonical/phase_reduction.hpp"
-#include "model/readable_order.hpp"
 
 namespace couplet::rules {
 
@@ -62,10 +62,14 @@ std::optional<ex> engine::eliminate_delta(const ex& term) {
         if (u.is_equal(v)) continue;
         const bool both_names = is_a<symbol>(u) && is_a<symbol>(v);
         bool u_stays;
-        if (both_names) u_stays = readable_name_less(ex_to<symbol>(u).get_name(), ex_to<symbol>(v).get_name());
-        else if (is_a<symbol>(v) && !u.has(v)) u_stays = true;
-        else if (is_a<symbol>(u) && !v.has(u)) u_stays = false;
-        else continue;
+        if (both_names)
+            u_stays = readable_name_less(ex_to<symbol>(u).get_name(), ex_to<symbol>(v).get_name());
+        else if (is_a<symbol>(v) && !u.has(v))
+            u_stays = true;
+        else if (is_a<symbol>(u) && !v.has(u))
+            u_stays = false;
+        else
+            continue;
         const ex& keep = u_stays ? u : v;
         const ex& drop = u_stays ? v : u;
         std::vector<ex> others = factors;

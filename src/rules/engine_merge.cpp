@@ -6,20 +6,20 @@
 #include <map>
 #include <set>
 
+#include "canonical/phase_reduction.hpp"
+#include "canonical/symmetries.hpp"
+#include "limits/run_limits.hpp"
 #include "model/fresh_index.hpp"
 #include "model/normalize.hpp"
-#include "model/rewrite.hpp"
+#include "model/readable_order.hpp"
 #include "model/result_shape.hpp"
-#include "limits/run_limits.hpp"
+#include "model/rewrite.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "canonical/symmetries.hpp"
 #include "rules/matcher.hpp"
 #include "rules/rewrites.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
-#include "canonical/phase_reduction.hpp"
-#include "model/readable_order.hpp"
 
 namespace couplet::rules {
 
@@ -43,8 +43,8 @@ std::optional<ex> engine::merge_sums(const std::vector<ex>& terms) {
         ex outside = 1;
         for (auto f = factors.begin(); f != factors.end(); ++f)
             if (f != at) outside *= *f;
-        bool captures = std::any_of(s.indices().begin(), s.indices().end(),
-                                    [&](const ex& i) { return outside.has(i); });
+        bool captures =
+            std::any_of(s.indices().begin(), s.indices().end(), [&](const ex& i) { return outside.has(i); });
         if (captures) continue;
         bool joined = false;
         for (group& g : groups) {

@@ -6,20 +6,20 @@
 #include <map>
 #include <set>
 
+#include "canonical/phase_reduction.hpp"
+#include "canonical/symmetries.hpp"
+#include "limits/run_limits.hpp"
 #include "model/fresh_index.hpp"
 #include "model/normalize.hpp"
-#include "model/rewrite.hpp"
+#include "model/readable_order.hpp"
 #include "model/result_shape.hpp"
-#include "limits/run_limits.hpp"
+#include "model/rewrite.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "canonical/symmetries.hpp"
 #include "rules/matcher.hpp"
 #include "rules/rewrites.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
-#include "canonical/phase_reduction.hpp"
-#include "model/readable_order.hpp"
 
 namespace couplet::rules {
 
@@ -128,7 +128,7 @@ std::optional<ex> engine::sum_rewrite(const ex& term, const std::vector<ex>& fac
 }
 
 std::optional<ex> engine::expand_ninej_for(const ex& term, const std::vector<ex>& outside, const index_sum& s,
-                                   const ex& body, const symbol& y) {
+                                           const ex& body, const symbol& y) {
     struct outcome {
         ex candidate, fired, shape;  // shape: fired in canonical arrangements, to spot repeats
         std::vector<rule_step> steps;

@@ -14,52 +14,57 @@ constexpr auto six = held_sixj;
 }  // namespace
 
 const identity& odd_symbol_identity() {
-    static const identity id = make_identity("symbol odd under its own symmetry", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
-        // Negating the bottom row multiplies a 3j by (-1)^(a+b+c) (DLMF 34.3.10), which is -1
-        // for the first 3j here (a and b integers): it is its own negative.  The second, even,
-        // stays, so that the instance is nonzero where it can be.
-        symbol a = p.angular("a", qn_parity::integer), b = p.angular("b", qn_parity::integer);
-        const ex even = wigner3j(a, b, a + b, 0, 0, 0).hold();
-        left = wigner3j(a, b, a + b - 1, 0, 0, 0).hold() + even;
-        right = even;
-    });
+    static const identity id = make_identity(
+        "symbol odd under its own symmetry", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
+            // Negating the bottom row multiplies a 3j by (-1)^(a+b+c) (DLMF 34.3.10), which is -1
+            // for the first 3j here (a and b integers): it is its own negative.  The second, even,
+            // stays, so that the instance is nonzero where it can be.
+            symbol a = p.angular("a", qn_parity::integer), b = p.angular("b", qn_parity::integer);
+            const ex even = wigner3j(a, b, a + b, 0, 0, 0).hold();
+            left = wigner3j(a, b, a + b - 1, 0, 0, 0).hold() + even;
+            right = even;
+        });
     return id;
 }
 
 const identity& repeated_delta_identity() {
-    static const identity id = make_identity("a repeated delta counts once", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
-        auto [a, b] = p.angulars({"a", "b"});
-        left = pow(kdelta(a, b).hold(), 2);
-        right = kdelta(a, b).hold();
-    });
+    static const identity id = make_identity("a repeated delta counts once", "common practice, no source",
+                                             [](pattern_table& p, ex& left, ex& right) {
+                                                 auto [a, b] = p.angulars({"a", "b"});
+                                                 left = pow(kdelta(a, b).hold(), 2);
+                                                 right = kdelta(a, b).hold();
+                                             });
     return id;
 }
 
 const identity& delta_elimination_identity() {
-    static const identity id = make_identity("delta elimination", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
-        auto [a, b, c, d, e, f] = p.angulars({"a", "b", "c", "d", "e", "f"});
-        left = kdelta(a, b).hold() * six(a, c, d, e, f, b);
-        right = kdelta(a, b).hold() * six(a, c, d, e, f, a);
-    });
+    static const identity id =
+        make_identity("delta elimination", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
+            auto [a, b, c, d, e, f] = p.angulars({"a", "b", "c", "d", "e", "f"});
+            left = kdelta(a, b).hold() * six(a, c, d, e, f, b);
+            right = kdelta(a, b).hold() * six(a, c, d, e, f, a);
+        });
     return id;
 }
 
 const identity& delta_collapse_identity() {
-    static const identity id = make_identity("delta collapses a sum", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
-        auto [x, a, b, c, d, e, f] = p.angulars({"x", "a", "b", "c", "d", "e", "f"});
-        left = make_sum(kdelta(x, a).hold() * six(x, b, c, d, e, f), lst{x});
-        right = six(a, b, c, d, e, f);
-    });
+    static const identity id =
+        make_identity("delta collapses a sum", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
+            auto [x, a, b, c, d, e, f] = p.angulars({"x", "a", "b", "c", "d", "e", "f"});
+            left = make_sum(kdelta(x, a).hold() * six(x, b, c, d, e, f), lst{x});
+            right = six(a, b, c, d, e, f);
+        });
     return id;
 }
 
 const identity& sum_split_identity() {
-    static const identity id = make_identity("sum split over its terms", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
-        auto [x, a, b, c, d, q] = p.angulars({"x", "a", "b", "c", "d", "q"});
-        const ex first = six(a, b, x, c, d, q), second = (2 * x + 1) * pow(six(a, b, x, c, d, q), 2);
-        left = make_sum(first + second, lst{x});
-        right = make_sum(first, lst{x}) + make_sum(second, lst{x});
-    });
+    static const identity id = make_identity(
+        "sum split over its terms", "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
+            auto [x, a, b, c, d, q] = p.angulars({"x", "a", "b", "c", "d", "q"});
+            const ex first = six(a, b, x, c, d, q), second = (2 * x + 1) * pow(six(a, b, x, c, d, q), 2);
+            left = make_sum(first + second, lst{x});
+            right = make_sum(first, lst{x}) + make_sum(second, lst{x});
+        });
     return id;
 }
 

@@ -13,8 +13,7 @@ using namespace GiNaC;
 namespace {
 
 bool is_half_odd(const ex& exponent) {
-    return is_a<numeric>(exponent) && ex_to<numeric>(exponent).is_rational() &&
-           ex_to<numeric>(exponent).denom() == 2;
+    return is_a<numeric>(exponent) && ex_to<numeric>(exponent).is_rational() && ex_to<numeric>(exponent).denom() == 2;
 }
 
 class splitter {

@@ -17,12 +17,12 @@
 namespace couplet::rules {
 
 struct sum_rule : identity {
-    GiNaC::symbol index;    // X, bound by the sum
+    GiNaC::symbol index;                        // X, bound by the sum
     std::optional<GiNaC::symbol> second_index;  // Y, for a double sum
-    int weight = 1;         // power of (2X+1) (and of (2Y+1))
-    GiNaC::ex phase = 0;    // exponent of (-1) in the pattern
-    std::vector<GiNaC::ex> factors;  // 6j / 9j / tri in pattern symbols
-    GiNaC::ex result;       // free of X
+    int weight = 1;                             // power of (2X+1) (and of (2Y+1))
+    GiNaC::ex phase = 0;                        // exponent of (-1) in the pattern
+    std::vector<GiNaC::ex> factors;             // 6j / 9j / tri in pattern symbols
+    GiNaC::ex result;                           // free of X
 
     GiNaC::ex left_side() const;
     std::vector<GiNaC::symbol> indices() const;

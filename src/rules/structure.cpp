@@ -54,8 +54,10 @@ std::vector<symmetry::transformed> sixj_regge_orbit(const ex& s) {
 
 std::vector<symmetry::transformed> arrangements(const ex& s) {
     switch (kind_of(s)) {
-        case symbol_kind::sixj: return has_compound_entry(s) ? sixj_regge_orbit(s) : symmetry::sixj_orbit(s);
-        case symbol_kind::ninej: return symmetry::ninej_orbit(s);
+        case symbol_kind::sixj:
+            return has_compound_entry(s) ? sixj_regge_orbit(s) : symmetry::sixj_orbit(s);
+        case symbol_kind::ninej:
+            return symmetry::ninej_orbit(s);
         case symbol_kind::triangle: {
             // tri(a, b, c) is symmetric in its three arguments.
             static const int perms[6][3] = {{0, 1, 2}, {0, 2, 1}, {1, 0, 2}, {1, 2, 0}, {2, 0, 1}, {2, 1, 0}};
@@ -63,7 +65,8 @@ std::vector<symmetry::transformed> arrangements(const ex& s) {
             for (const auto& p : perms) out.push_back({triangle(s.op(p[0]), s.op(p[1]), s.op(p[2])).hold(), 0});
             return out;
         }
-        default: return {{s, 0}};
+        default:
+            return {{s, 0}};
     }
 }
 

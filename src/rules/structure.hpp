@@ -8,10 +8,10 @@
 #include <optional>
 #include <vector>
 
+#include "canonical/symmetries.hpp"
 #include "model/quantum.hpp"
 #include "model/rewrite.hpp"
 #include "phase/context.hpp"
-#include "canonical/symmetries.hpp"
 
 namespace couplet::rules {
 
@@ -34,7 +34,6 @@ using couplet::terms_of;
 // given, is declared with unknown parity, so that what its triads alone imply can be asked.
 phase::context context_for(const GiNaC::ex& term, const quantum_numbers& numbers,
                            const std::optional<GiNaC::symbol>& loose = std::nullopt);
-
 
 // Whether (-1)^x == (-1)^y in the context; false also when either side is no linear form.
 bool same_phase(const phase::context& ctx, const GiNaC::ex& x, const GiNaC::ex& y);

@@ -139,8 +139,8 @@ sum_rule ninej_orthogonality() {
     s.r.second_index = y;
     s.r.factors = {wigner9j(a, b, x, c, d, y, p, q, e).hold(), wigner9j(a, b, x, c, d, y, pp, qq, e).hold()};
     // The triads of p, q left without a symbol to enforce them are carried explicitly.
-    s.r.result = kdelta(p, pp).hold() * kdelta(q, qq).hold() * tri(a, c, p) * tri(b, d, q) * tri(p, q, e) /
-                 (hat2(p) * hat2(q));
+    s.r.result =
+        kdelta(p, pp).hold() * kdelta(q, qq).hold() * tri(a, c, p) * tri(b, d, q) * tri(p, q, e) / (hat2(p) * hat2(q));
     return s.r;
 }
 
@@ -172,9 +172,9 @@ sum_rule with_instance(sum_rule r) {
 const std::vector<sum_rule>& sum_rules() {
     static const std::vector<sum_rule> all = [] {
         std::vector<sum_rule> out;
-        for (sum_rule r : {orthogonality(), racah_sum(), biedenharn_elliott(), ninej_from_three_sixj(),
-                           triangle_dimension(), ninej_orthogonality(), ninej_sum_rule(), weighted_sixj_sum(),
-                           signed_sixj_sum()})
+        for (sum_rule r :
+             {orthogonality(), racah_sum(), biedenharn_elliott(), ninej_from_three_sixj(), triangle_dimension(),
+              ninej_orthogonality(), ninej_sum_rule(), weighted_sixj_sum(), signed_sixj_sum()})
             out.push_back(with_instance(r));
         return out;
     }();
@@ -205,8 +205,8 @@ local_rule sixj_zero() {
     auto a = s("a"), b = s("b"), c = s("c"), e = s("e"), f = s("f");
     s.r.pattern = six(a, b, c, 0, e, f);
     // The triads (0 b f) and (0 e c) become deltas; (a b c) has no other symbol left to enforce it.
-    s.r.result = kdelta(b, f).hold() * kdelta(c, e).hold() * tri(a, b, c) * make_phase(a + b + c) /
-                 sqrt(hat2(b) * hat2(c));
+    s.r.result =
+        kdelta(b, f).hold() * kdelta(c, e).hold() * tri(a, b, c) * make_phase(a + b + c) / sqrt(hat2(b) * hat2(c));
     return s.r;
 }
 

@@ -4,10 +4,10 @@
 #include <array>
 #include <vector>
 
+#include "canonical/symmetries.hpp"
 #include "model/rewrite.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
-#include "canonical/symmetries.hpp"
 
 namespace couplet {
 
@@ -110,8 +110,8 @@ ex common_factors_out(const ex& e) {
         }
         std::vector<std::pair<ex, numeric>> kept;
         for (const auto& entry : common) {
-            auto it = std::find_if(here.begin(), here.end(),
-                                   [&](const auto& h) { return h.first.is_equal(entry.first); });
+            auto it =
+                std::find_if(here.begin(), here.end(), [&](const auto& h) { return h.first.is_equal(entry.first); });
             if (it != here.end()) kept.emplace_back(entry.first, std::min(entry.second, it->second));
         }
         common = kept;
@@ -163,7 +163,8 @@ ex collect_level(const ex& e) {
                 return !g.sum.is_zero() && g.structure.is_equal(rest) &&
                        ex_to<index_sum>(g.sum).indices().is_equal(s.indices());
             });
-            if (it == groups.end()) groups.push_back({rest, sum, p.coefficient, p.coefficient * s.body(), 1});
+            if (it == groups.end())
+                groups.push_back({rest, sum, p.coefficient, p.coefficient * s.body(), 1});
             else {
                 it->coefficient += p.coefficient;
                 it->bodies += p.coefficient * s.body();
@@ -173,7 +174,8 @@ ex collect_level(const ex& e) {
         }
         auto it = std::find_if(groups.begin(), groups.end(),
                                [&](const group& g) { return g.sum.is_zero() && g.structure.is_equal(p.structure); });
-        if (it == groups.end()) groups.push_back({p.structure, 0, p.coefficient, 0, 1});
+        if (it == groups.end())
+            groups.push_back({p.structure, 0, p.coefficient, 0, 1});
         else {
             it->coefficient += p.coefficient;
             ++it->members;

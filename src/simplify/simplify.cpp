@@ -2,19 +2,19 @@
 
 #include <tuple>
 
+#include "canonical/phase_reduction.hpp"
+#include "canonical/symmetries.hpp"
+#include "limits/run_limits.hpp"
 #include "model/normalize.hpp"
 #include "model/result_shape.hpp"
 #include "model/symbols.hpp"
 #include "network/completeness.hpp"
 #include "network/reduce.hpp"
-#include "limits/run_limits.hpp"
 #include "rules/engine.hpp"
-#include "canonical/symmetries.hpp"
 #include "simplify/closed_form.hpp"
 #include "simplify/frozen_weights.hpp"
 #include "simplify/nest_sums.hpp"
 #include "simplify/stage_identities.hpp"
-#include "canonical/phase_reduction.hpp"
 
 namespace couplet {
 
@@ -24,8 +24,7 @@ using GiNaC::is_a;
 namespace {
 
 void record_network_steps(const std::vector<network::reduction_step>& moves, std::vector<simplification_step>& steps) {
-    for (const auto& m : moves)
-        steps.push_back({m.rule, m.reference, thaw_weights(m.before), thaw_weights(m.after)});
+    for (const auto& m : moves) steps.push_back({m.rule, m.reference, thaw_weights(m.before), thaw_weights(m.after)});
 }
 
 // An answer is never worse than the input's own form: not more sums; with as many sums, not
@@ -63,13 +62,12 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
 simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& numbers) {
     std::vector<simplification_step> steps_taken;
     GiNaC::ex x = normalize(e);
-    const bool has_clebsch = x.has(clebsch(GiNaC::wild(0), GiNaC::wild(1), GiNaC::wild(2), GiNaC::wild(3),
-                                           GiNaC::wild(4), GiNaC::wild(5)));
+    const bool has_clebsch =
+        x.has(clebsch(GiNaC::wild(0), GiNaC::wild(1), GiNaC::wild(2), GiNaC::wild(3), GiNaC::wild(4), GiNaC::wild(5)));
     const ex written = x;
     x = symmetry::canonicalize_symbols(x, numbers);
     const ex arranged = x;
-    if (has_clebsch)
-        steps_taken.push_back(step_by(clebsch_as_threej_identity(), written, merge_phases(x)));
+    if (has_clebsch) steps_taken.push_back(step_by(clebsch_as_threej_identity(), written, merge_phases(x)));
     std::vector<network::reduction_step> completeness;
     x = network::reduce_completeness(x, numbers, &completeness);
     record_network_steps(completeness, steps_taken);
@@ -83,16 +81,14 @@ simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& nu
     check_deadline();
     const ex unreduced = merge_phases(x);
     x = merge_phases(reduce_phases(x, numbers));
-    if (!x.is_equal(unreduced))
-        steps_taken.push_back(step_by(phase_reduction_identity(), unreduced, x, true));
+    if (!x.is_equal(unreduced)) steps_taken.push_back(step_by(phase_reduction_identity(), unreduced, x, true));
     check_deadline();
     rules::jsum_result jsums = rules::reduce_jsums(x, numbers);
     x = jsums.value;
     steps_taken.insert(steps_taken.end(), jsums.trace.begin(), jsums.trace.end());
     x = merge_phases(x);
     const ex closed = closed_form(x);
-    if (!closed.is_equal(x))
-        steps_taken.push_back(step_by(closed_form_identity(), x, closed, true));
+    if (!closed.is_equal(x)) steps_taken.push_back(step_by(closed_form_identity(), x, closed, true));
     x = closed;
     // Counted on the input as canonicalized at the start (its phases do not change the counts);
     // the full canonical form, phases reduced, only when it is the answer.

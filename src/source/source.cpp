@@ -42,8 +42,7 @@ std::string format_diagnostic(const source_file& src, const user_error& err) {
     for (char& c : line)
         if (c == '\t') c = ' ';
     std::string out = src.name() + ":" + std::to_string(pos.line) + ":" + std::to_string(pos.column) +
-                      ": error: " + err.what() + "\n  " + line + "\n  " + std::string(col - start, ' ') +
-                      "^\n";
+                      ": error: " + err.what() + "\n  " + line + "\n  " + std::string(col - start, ' ') + "^\n";
     return out;
 }
 

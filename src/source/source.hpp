@@ -28,8 +28,7 @@ private:
 // FILE:LINE:COLUMN: error: MESSAGE with the source line and a caret; exit code 2.
 class user_error : public std::runtime_error {
 public:
-    user_error(std::size_t offset, const std::string& message)
-        : std::runtime_error(message), offset_(offset) {}
+    user_error(std::size_t offset, const std::string& message) : std::runtime_error(message), offset_(offset) {}
     std::size_t offset() const { return offset_; }
 
 private:

@@ -33,8 +33,8 @@ std::string summary(const check_report& r) {
             return "fails by a phase: holds after multiplying the right side by " + phase_text(*r.missing_phase) +
                    "; " + evidence(r);
         case verdict::fails_by_factor:
-            return "fails by a factor: holds after multiplying the right side by " + to_text(*r.missing_factor) +
-                   "; " + evidence(r);
+            return "fails by a factor: holds after multiplying the right side by " + to_text(*r.missing_factor) + "; " +
+                   evidence(r);
         case verdict::undecided:
             return "undecided: the two sides agree at the " + std::to_string(r.points) + " point" +
                    (r.points == 1 ? "" : "s") + " checked before the time limit";

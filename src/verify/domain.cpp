@@ -38,9 +38,12 @@ std::size_t doubled_form::last_variable() const {
 bool rule::holds(const std::vector<long>& t) const {
     long v = form.value(t);
     switch (kind) {
-        case rule_kind::nonnegative: return v >= 0;
-        case rule_kind::zero: return v == 0;
-        default: return v % modulus == 0;
+        case rule_kind::nonnegative:
+            return v >= 0;
+        case rule_kind::zero:
+            return v == 0;
+        default:
+            return v % modulus == 0;
     }
 }
 
@@ -213,8 +216,7 @@ private:
         cln::cl_I scale = cln::denominator(constant);
         for (const auto& h : halves) scale = cln::lcm(scale, cln::denominator(h.second));
         doubled_form f;
-        for (const auto& [k, c] : halves)
-            f.terms.emplace_back(k, cln::cl_I_to_long(cln::the<cln::cl_I>(c * scale)));
+        for (const auto& [k, c] : halves) f.terms.emplace_back(k, cln::cl_I_to_long(cln::the<cln::cl_I>(c * scale)));
         f.constant = cln::cl_I_to_long(cln::the<cln::cl_I>(constant * scale));
         return std::make_pair(f, cln::cl_I_to_long(scale));
     }
@@ -245,8 +247,12 @@ private:
                 r.kind = rule_kind::divisible;
                 r.modulus = scale;
                 break;
-            case condition::nonnegative: r.kind = rule_kind::nonnegative; break;
-            case condition::zero: r.kind = rule_kind::zero; break;
+            case condition::nonnegative:
+                r.kind = rule_kind::nonnegative;
+                break;
+            case condition::zero:
+                r.kind = rule_kind::zero;
+                break;
         }
         (p.hard ? d.hard : d.selection).push_back(r);
     }

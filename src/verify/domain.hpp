@@ -60,8 +60,8 @@ struct sampling_domain {
     std::vector<rule> selection;
 
     std::size_t index_of(const std::string& name) const;  // numbers.size() when absent
-    bool preferred(const std::vector<long>& t) const;       // every selection rule holds
-    bool admissible(const std::vector<long>& t) const;      // every hard rule holds
+    bool preferred(const std::vector<long>& t) const;     // every selection rule holds
+    bool admissible(const std::vector<long>& t) const;    // every hard rule holds
 };
 
 // The free quantum numbers of all the expressions together (names bound by a sum are not

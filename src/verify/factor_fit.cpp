@@ -8,11 +8,21 @@ factor_candidate::factor_candidate(factor_shape shape, std::size_t variable, con
     : shape_(shape), variable_(variable) {
     GiNaC::ex hat2 = shape == factor_shape::constant ? GiNaC::ex(1) : 2 * domain.numbers[variable].symbol + 1;
     switch (shape) {
-        case factor_shape::constant: factor_ = 1; break;
-        case factor_shape::hat_squared: factor_ = hat2; break;
-        case factor_shape::inverse_hat_squared: factor_ = 1 / hat2; break;
-        case factor_shape::hat: factor_ = GiNaC::sqrt(hat2); break;
-        case factor_shape::inverse_hat: factor_ = 1 / GiNaC::sqrt(hat2); break;
+        case factor_shape::constant:
+            factor_ = 1;
+            break;
+        case factor_shape::hat_squared:
+            factor_ = hat2;
+            break;
+        case factor_shape::inverse_hat_squared:
+            factor_ = 1 / hat2;
+            break;
+        case factor_shape::hat:
+            factor_ = GiNaC::sqrt(hat2);
+            break;
+        case factor_shape::inverse_hat:
+            factor_ = 1 / GiNaC::sqrt(hat2);
+            break;
     }
 }
 
@@ -22,12 +32,18 @@ void factor_candidate::observe(const exact::number& ratio, const point& t) {
     if (shape_ != factor_shape::constant) {
         long hat2 = t[variable_] + 1;
         switch (shape_) {
-            case factor_shape::hat_squared: q *= exact::number(cln::cl_RA(1) / hat2); break;
-            case factor_shape::inverse_hat_squared: q *= exact::number(hat2); break;
+            case factor_shape::hat_squared:
+                q *= exact::number(cln::cl_RA(1) / hat2);
+                break;
+            case factor_shape::inverse_hat_squared:
+                q *= exact::number(hat2);
+                break;
             case factor_shape::hat:
                 q *= exact::number::sqrt_of(hat2) * exact::number(cln::cl_RA(1) / hat2);
                 break;
-            default: q *= exact::number::sqrt_of(hat2); break;
+            default:
+                q *= exact::number::sqrt_of(hat2);
+                break;
         }
     }
     bool negative = q.sign() < 0;

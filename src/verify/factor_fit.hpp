@@ -29,7 +29,7 @@ public:
 
     bool alive() const { return alive_; }
     factor_shape shape() const { return shape_; }
-    const GiNaC::ex& factor() const { return factor_; }   // F
+    const GiNaC::ex& factor() const { return factor_; }             // F
     const exact::number& magnitude() const { return *magnitude_; }  // |c|, once observed
     bool observed() const { return magnitude_.has_value(); }
     const std::vector<sign_need>& needs() const { return needs_; }

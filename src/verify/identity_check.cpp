@@ -10,9 +10,9 @@
 #include "model/symbols.hpp"
 #include "simplify/simplify.hpp"
 #include "verify/domain.hpp"
+#include "verify/factor_fit.hpp"
 #include "verify/phase_fit.hpp"
 #include "verify/tolerant_evaluation.hpp"
-#include "verify/factor_fit.hpp"
 
 namespace couplet::verify {
 
@@ -30,11 +30,16 @@ std::string describe(const counterexample& c) {
 
 const char* verdict_name(verdict v) {
     switch (v) {
-        case verdict::holds: return "holds";
-        case verdict::fails_by_phase: return "fails by a phase";
-        case verdict::fails_by_factor: return "fails by a factor";
-        case verdict::undecided: return "undecided";
-        default: return "fails";
+        case verdict::holds:
+            return "holds";
+        case verdict::fails_by_phase:
+            return "fails by a phase";
+        case verdict::fails_by_factor:
+            return "fails by a factor";
+        case verdict::undecided:
+            return "undecided";
+        default:
+            return "fails";
     }
 }
 
@@ -43,7 +48,8 @@ namespace {
 counterexample make_counterexample(const sampling_domain& d, const point& t, const exact::number& l,
                                    const exact::number& r) {
     counterexample c{{}, l, r};
-    for (std::size_t k = 0; k < t.size(); ++k) c.at.emplace_back(d.numbers[k].symbol.get_name(), GiNaC::numeric(t[k], 2));
+    for (std::size_t k = 0; k < t.size(); ++k)
+        c.at.emplace_back(d.numbers[k].symbol.get_name(), GiNaC::numeric(t[k], 2));
     return c;
 }
 
@@ -161,7 +167,8 @@ bool repair_holds(const ex& lhs, const ex& rhs, const ex& fix, const quantum_num
         std::size_t fresh_count = static_cast<std::size_t>(std::clamp(s.samples / 4, 10, 50));
         int max_j = s.random_max_j > 0 ? s.random_max_j : s.depth + 4;
         tolerant_expression l(lhs, numbers), r(rhs * fix, numbers);
-        for (const point& t : random_points(d, fresh_count, max_j, s.seed ^ 0x9e3779b97f4a7c15ULL, seen.seen(), s.depth)) {
+        for (const point& t :
+             random_points(d, fresh_count, max_j, s.seed ^ 0x9e3779b97f4a7c15ULL, seen.seen(), s.depth)) {
             assignment at = to_assignment(d, t);
             try {
                 if (l.at(at) != r.at(at)) return false;
@@ -177,7 +184,8 @@ bool repair_holds(const ex& lhs, const ex& rhs, const ex& fix, const quantum_num
 
 bool symbolically_zero(const ex& difference, const quantum_numbers& numbers, const check_options& options) {
     try {
-        ex reduced = options.simplifier ? options.simplifier(difference, numbers) : simplify_expression(difference, numbers);
+        ex reduced =
+            options.simplifier ? options.simplifier(difference, numbers) : simplify_expression(difference, numbers);
         return reduced.is_zero();
     } catch (const refusal&) {
         return false;  // no proof; evaluation decides, and reports what it cannot evaluate
@@ -186,7 +194,8 @@ bool symbolically_zero(const ex& difference, const quantum_numbers& numbers, con
 
 }  // namespace
 
-check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers& numbers, const check_options& options) {
+check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers& numbers,
+                            const check_options& options) {
     check_report report;
     report.depth = options.sampling.depth;
     if (options.symbolic) report.proved_symbolically = symbolically_zero(lhs - rhs, numbers, options);
@@ -214,8 +223,9 @@ check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers&
 
     if (cmp.all_equal()) {
         if (report.points == 0)
-            report.note = "no assignment of the free quantum numbers is admissible (declarations, triads and "
-                          "projections exclude them all), so the identity says nothing";
+            report.note =
+                "no assignment of the free quantum numbers is admissible (declarations, triads and "
+                "projections exclude them all), so the identity says nothing";
         else if (report.nonzero == 0)
             report.note = "both sides are 0 at every point checked, which proves little";
         return report;

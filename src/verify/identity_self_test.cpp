@@ -19,10 +19,10 @@ identity_test self_test(const identity& id, const sampling_options& options) {
     out.points = v.points;
     out.nonzero = v.nonzero;
     if (!v.agrees)
-        out.disagreement = !v.result_error.empty() ? "the right side cannot be evaluated: " + v.result_error
-                                                   : "at " + describe(*v.counter) + " the left side is " +
-                                                         v.counter->lhs.to_string() + ", the right side " +
-                                                         v.counter->rhs.to_string();
+        out.disagreement = !v.result_error.empty()
+                               ? "the right side cannot be evaluated: " + v.result_error
+                               : "at " + describe(*v.counter) + " the left side is " + v.counter->lhs.to_string() +
+                                     ", the right side " + v.counter->rhs.to_string();
     return out;
 }
 

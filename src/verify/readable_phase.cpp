@@ -41,8 +41,8 @@ bool fits(const phase_exponent& e, const std::vector<phase_class>& classes) {
 
 phase_exponent readable_phase(const std::vector<phase_class>& classes, const phase_exponent& fallback) {
     const std::size_t n = fallback.coefficients.size();
-    const int fallback_terms = static_cast<int>(std::count_if(fallback.coefficients.begin(), fallback.coefficients.end(),
-                                                              [](int c) { return c != 0; }));
+    const int fallback_terms = static_cast<int>(
+        std::count_if(fallback.coefficients.begin(), fallback.coefficients.end(), [](int c) { return c != 0; }));
     static const int coefficient_values[3] = {1, 2, -1};
     static const int constant_values[4] = {0, 1, 2, -1};
     long tried = 0;

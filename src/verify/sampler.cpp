@@ -87,11 +87,14 @@ private:
     std::pair<long, long> static_range(std::size_t k) const {
         const free_number& f = d_.numbers[k];
         switch (f.role) {
-            case qn_role::angular: return {0, 2L * max_j_};
-            case qn_role::projection: return {-(2L * max_j_ + f.slack), 2L * max_j_ + f.slack};
+            case qn_role::angular:
+                return {0, 2L * max_j_};
+            case qn_role::projection:
+                return {-(2L * max_j_ + f.slack), 2L * max_j_ + f.slack};
             // A name in no coupling symbol is most often a j in a factor like sqrt(2j+1) or
             // 1/(2j+1), where a negative value means nothing: small and non-negative.
-            default: return {0, 2L * small_j_};
+            default:
+                return {0, 2L * small_j_};
         }
     }
 
@@ -130,8 +133,8 @@ bool smaller_point(const point& a, const point& b) {
     return a < b;
 }
 
-std::vector<point> random_points(const sampling_domain& domain, std::size_t count, int max_j,
-                                 std::uint64_t seed, const std::vector<point>& avoid, int plain_max) {
+std::vector<point> random_points(const sampling_domain& domain, std::size_t count, int max_j, std::uint64_t seed,
+                                 const std::vector<point>& avoid, int plain_max) {
     std::mt19937_64 rng(seed);
     std::set<point> seen(avoid.begin(), avoid.end());
     assigner keeping(domain, true, max_j, plain_max);
@@ -189,8 +192,8 @@ sample_set sample_points(const sampling_domain& domain, const sampling_options& 
     all.insert(all.end(), outside.begin(), outside.end());
 
     int max_j = options.random_max_j > 0 ? options.random_max_j : options.depth + 4;
-    std::vector<point> extra = random_points(domain, static_cast<std::size_t>(std::max(options.samples, 0)),
-                                             max_j, rng(), all, options.depth);
+    std::vector<point> extra =
+        random_points(domain, static_cast<std::size_t>(std::max(options.samples, 0)), max_j, rng(), all, options.depth);
     s.random = extra.size();
     all.insert(all.end(), extra.begin(), extra.end());
     std::sort(all.begin(), all.end(), smaller_point);

@@ -13,9 +13,9 @@
 namespace couplet::verify {
 
 struct sampling_options {
-    int depth = 2;                // exhaustive: every free j (and |m|, plain x) <= depth
-    int samples = 200;            // random points beyond the exhaustive ones
-    int random_max_j = 0;         // largest j of random points; 0 means depth + 4
+    int depth = 2;         // exhaustive: every free j (and |m|, plain x) <= depth
+    int samples = 200;     // random points beyond the exhaustive ones
+    int random_max_j = 0;  // largest j of random points; 0 means depth + 4
     // Beyond this many exhaustive points a uniform random subset is kept.
     std::size_t exhaustive_limit = 4000;
     // Small points that break a selection rule: symbols vanish there, and an identity whose
@@ -27,19 +27,19 @@ struct sampling_options {
 using point = std::vector<long>;  // doubled values, in the domain's variable order
 
 struct sample_set {
-    std::vector<point> points;    // sorted: smaller points first
-    std::size_t exhaustive = 0;   // points from the exhaustive pass
-    std::size_t outside = 0;      // points that break a selection rule
-    std::size_t random = 0;       // random larger points
-    bool complete = true;         // the exhaustive pass kept every point it found
+    std::vector<point> points;   // sorted: smaller points first
+    std::size_t exhaustive = 0;  // points from the exhaustive pass
+    std::size_t outside = 0;     // points that break a selection rule
+    std::size_t random = 0;      // random larger points
+    bool complete = true;        // the exhaustive pass kept every point it found
 };
 
 sample_set sample_points(const sampling_domain& domain, const sampling_options& options);
 
 // `count` further random points with j <= max_j (plain variables 0 <= x <= plain_max) that keep
 // the selection rules where the sampler manages, none of them in `avoid`.
-std::vector<point> random_points(const sampling_domain& domain, std::size_t count, int max_j,
-                                 std::uint64_t seed, const std::vector<point>& avoid, int plain_max = 2);
+std::vector<point> random_points(const sampling_domain& domain, std::size_t count, int max_j, std::uint64_t seed,
+                                 const std::vector<point>& avoid, int plain_max = 2);
 
 // Up to `count` admissible points with every j <= depth that break a selection rule, none of
 // them in `avoid`.

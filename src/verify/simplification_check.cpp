@@ -16,7 +16,8 @@ namespace {
 
 counterexample at_point(const sampling_domain& d, const point& t, const exact::number& x, const exact::number& y) {
     counterexample c{{}, x, y};
-    for (std::size_t k = 0; k < t.size(); ++k) c.at.emplace_back(d.numbers[k].symbol.get_name(), GiNaC::numeric(t[k], 2));
+    for (std::size_t k = 0; k < t.size(); ++k)
+        c.at.emplace_back(d.numbers[k].symbol.get_name(), GiNaC::numeric(t[k], 2));
     return c;
 }
 

@@ -31,8 +31,8 @@ struct simplification_check {
     bool agrees = true;
     // Points checked where the input is defined (no division by 0), and of which nonzero.
     std::size_t points = 0, nonzero = 0;
-    std::size_t sampled = 0;  // points the sampler offered
-    bool complete = true;     // every point of a complete exhaustive pass was checked
+    std::size_t sampled = 0;                // points the sampler offered
+    bool complete = true;                   // every point of a complete exhaustive pass was checked
     std::optional<counterexample> counter;  // lhs: the input's value, rhs: the result's
     // The result could not be evaluated where the input is nonzero (then counter->rhs is 0).
     std::string result_error;

@@ -1,7 +1,7 @@
 // The public interface, used as a C++ program uses it: only couplet/couplet.hpp, plus GSL for
 // an outside value and nlohmann to read the JSON back.
-#include <catch2/catch.hpp>
 #include <gsl/gsl_sf_coupling.h>
+#include <catch2/catch.hpp>
 
 #include <cmath>
 #include <nlohmann/json.hpp>
@@ -55,7 +55,8 @@ TEST_CASE("the front door evaluates exactly", "[api]") {
 }
 
 TEST_CASE("a program runs statement by statement and stops at the first bad one", "[api]") {
-    couplet::program p = couplet::parse("let W = 6j{a, b, c; d, e, f}\neval 6j{1, 1, 1; 1, 1, 1}\neval 1/x at x=0\n", "f.cpl");
+    couplet::program p =
+        couplet::parse("let W = 6j{a, b, c; d, e, f}\neval 6j{1, 1, 1; 1, 1, 1}\neval 1/x at x=0\n", "f.cpl");
     REQUIRE(p.size() == 3);
     CHECK(p[0].kind == couplet::statement_kind::definition);
     CHECK(p[0].name == "W");
@@ -69,8 +70,8 @@ TEST_CASE("a program runs statement by statement and stops at the first bad one"
         CHECK(e.diagnostic().find("f.cpl:3:1: error:") == 0);
         CHECK(nlohmann::json::parse(couplet::to_json(e)).at("line") == 3);
     }
-    CHECK(seen == std::vector<couplet::statement_kind>{couplet::statement_kind::definition,
-                                                      couplet::statement_kind::eval});
+    CHECK(seen ==
+          std::vector<couplet::statement_kind>{couplet::statement_kind::definition, couplet::statement_kind::eval});
     CHECK_THROWS_AS(couplet::parse("6j{a, b"), couplet::input_error);
     CHECK_THROWS_AS(couplet::check("6j{a, b, c; d, e, f}"), couplet::input_error);
 }

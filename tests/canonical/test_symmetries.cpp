@@ -2,12 +2,12 @@
 // at 1000 random admissible points.
 #include <catch2/catch.hpp>
 
+#include "admissible.hpp"
+#include "canonical/symmetries.hpp"
 #include "eval/evaluate.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "canonical/symmetries.hpp"
 #include "support.hpp"
-#include "admissible.hpp"
 
 using namespace couplet;
 
@@ -61,21 +61,24 @@ TEST_CASE("3j generators, Regge's included, hold exactly (DLMF 34.3.8-34.3.11)",
     symbolic s(threej_text, threej_names);
     testing::admissible_points gen(3811, 10);
     for (const auto& g : symmetry::threej_symmetries())
-        check_transformation(s, g.apply(s.symbol), [&] { return gen.threej(); }, g.name + " (" + g.reference + ")");
+        check_transformation(
+            s, g.apply(s.symbol), [&] { return gen.threej(); }, g.name + " (" + g.reference + ")");
 }
 
 TEST_CASE("6j generators, Regge's included, hold exactly (DLMF 34.5.8-34.5.9)", "[symmetry]") {
     symbolic s(sixj_text, sixj_names);
     testing::admissible_points gen(3458, 10);
     for (const auto& g : symmetry::sixj_symmetries())
-        check_transformation(s, g.apply(s.symbol), [&] { return gen.sixj(); }, g.name + " (" + g.reference + ")");
+        check_transformation(
+            s, g.apply(s.symbol), [&] { return gen.sixj(); }, g.name + " (" + g.reference + ")");
 }
 
 TEST_CASE("9j generators hold exactly (DLMF 34.7(ii))", "[symmetry]") {
     symbolic s(ninej_text, ninej_names);
     testing::admissible_points gen(347, 6);
     for (const auto& g : symmetry::ninej_symmetries())
-        check_transformation(s, g.apply(s.symbol), [&] { return gen.ninej(); }, g.name + " (" + g.reference + ")");
+        check_transformation(
+            s, g.apply(s.symbol), [&] { return gen.ninej(); }, g.name + " (" + g.reference + ")");
 }
 
 TEST_CASE("the orbits have the classical sizes and every arrangement holds", "[symmetry][slow]") {
@@ -93,10 +96,16 @@ TEST_CASE("the orbits have the classical sizes and every arrangement holds", "[s
     CHECK(distinct(o6) == 24);
     CHECK(distinct(o9) == 72);
     testing::admissible_points gen(1234, 8);
-    for (const auto& t : o3) check_transformation(s3, t, [&] { return gen.threej(); }, "3j arrangement");
-    for (const auto& t : o6) check_transformation(s6, t, [&] { return gen.sixj(); }, "6j arrangement");
+    for (const auto& t : o3)
+        check_transformation(
+            s3, t, [&] { return gen.threej(); }, "3j arrangement");
+    for (const auto& t : o6)
+        check_transformation(
+            s6, t, [&] { return gen.sixj(); }, "6j arrangement");
     testing::admissible_points gen9(4321, 4);
-    for (const auto& t : o9) check_transformation(s9, t, [&] { return gen9.ninej(); }, "9j arrangement");
+    for (const auto& t : o9)
+        check_transformation(
+            s9, t, [&] { return gen9.ninej(); }, "9j arrangement");
 }
 
 TEST_CASE("canonical forms do not depend on the arrangement typed", "[symmetry]") {
@@ -105,7 +114,7 @@ TEST_CASE("canonical forms do not depend on the arrangement typed", "[symmetry]"
         auto orbit = s->symbol.nops() == 6 && kind_of(s->symbol) == symbol_kind::threej
                          ? symmetry::threej_orbit(s->symbol)
                      : kind_of(s->symbol) == symbol_kind::sixj ? symmetry::sixj_orbit(s->symbol)
-                                                              : symmetry::ninej_orbit(s->symbol);
+                                                               : symmetry::ninej_orbit(s->symbol);
         std::set<std::string> forms;
         for (const auto& t : orbit) forms.insert(to_text(symmetry::canonical(t.symbol, s->program.numbers).symbol));
         CHECK(forms.size() == 1);
@@ -125,7 +134,8 @@ TEST_CASE("Clebsch-Gordan to 3j (DLMF 34.1.1) holds exactly", "[symmetry]") {
 TEST_CASE("3j to Clebsch-Gordan form (DLMF 34.1.1 read backwards) holds exactly", "[symmetry]") {
     symbolic s(threej_text, threej_names);
     testing::admissible_points gen(3412, 10);
-    check_transformation(s, {symmetry::threej_as_clebsch(s.symbol), 0}, [&] { return gen.threej(); }, "3j as CG");
+    check_transformation(
+        s, {symmetry::threej_as_clebsch(s.symbol), 0}, [&] { return gen.threej(); }, "3j as CG");
 }
 
 TEST_CASE("simplify examples from the command line", "[symmetry][cli]") {
@@ -160,7 +170,8 @@ TEST_CASE("the option --prefer cg writes results with Clebsch-Gordan coefficient
     CHECK(r.code == 0);
     CHECK(r.out == "<j1 m1, j2 m2 | J M>\n");
     // CG orthogonality summed over m1, m2 (DLMF 34.3.16 in CG form) stays free of 3j symbols.
-    r = testing::run_cli({"simplify", "--prefer", "cg", "-e", "sum(m1, m2 : <a m1, b m2 | c m3> * <a m1, b m2 | d m4>)"});
+    r = testing::run_cli(
+        {"simplify", "--prefer", "cg", "-e", "sum(m1, m2 : <a m1, b m2 | c m3> * <a m1, b m2 | d m4>)"});
     CHECK(r.code == 0);
     CHECK(r.out == "delta(c, d)*delta(m3, m4)*tri(a, b, c)\n");
     CHECK(testing::run_cli({"simplify", "--prefer", "9j", "-e", "1"}).code == 2);

@@ -24,7 +24,8 @@ TEST_CASE("the expansion size is counted without expanding", "[cli][bounds]") {
         for (int f = 0; f < factors; ++f) {
             GiNaC::ex sum = 0;
             int terms = pick(1, 4);
-            for (int t = 0; t < terms; ++t) sum += GiNaC::symbol("s" + std::to_string(trial) + "_" + std::to_string(f) + "_" + std::to_string(t));
+            for (int t = 0; t < terms; ++t)
+                sum += GiNaC::symbol("s" + std::to_string(trial) + "_" + std::to_string(f) + "_" + std::to_string(t));
             product *= sum;
         }
         INFO(product);
@@ -92,8 +93,8 @@ TEST_CASE("time-limit: during check prints what the points established", "[cli][
     const std::string identity =
         "sum(x : (2*x+1) * 6j{a+100, b+100, x; c+100, d+100, p} * 6j{c+100, d+100, x; a+100, b+100, q}) == "
         "delta(p, q)*tri(a+100, d+100, p)*tri(b+100, c+100, p)/(2*p+1)";
-    auto r = run_cli({"check", "--time-limit", "2", "--depth", "1", "--samples", "10000", "--format", "json",
-                      "-e", identity});
+    auto r = run_cli(
+        {"check", "--time-limit", "2", "--depth", "1", "--samples", "10000", "--format", "json", "-e", identity});
     INFO(r.out << r.err);
     CHECK(r.code == 2);
     auto record = nlohmann::json::parse(r.out.substr(0, r.out.find('\n')));

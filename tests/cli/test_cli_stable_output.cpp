@@ -30,7 +30,8 @@ TEST_CASE("the program prints the same form of a result on every run", "[cli][pr
         return;
     }
     const std::string command =
-        std::string("'") + COUPLET_CLI_PATH + "' simplify --no-verify -e '"
+        std::string("'") + COUPLET_CLI_PATH +
+        "' simplify --no-verify -e '"
         "sum(m1, m2, m3, m4 : (-1)^(a-m1+b-m2+c-m3+d-m4) * 3j(a, d, e; m1, -m4, M1) * 3j(b, a, f; m2, -m1, M2)"
         " * 3j(c, b, g; m3, -m2, M3) * 3j(d, c, h; m4, -m3, M4))'";
     std::set<std::string> forms;

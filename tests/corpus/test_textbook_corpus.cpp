@@ -26,8 +26,7 @@ TEST_CASE("textbook results come out in the form their sources print", "[corpus]
         auto program = lower_text(declarations + e.input + "\n" + answer + "\n" + e.closed_form);
         const auto& st = program.statements;
         REQUIRE(st.size() >= 3);
-        const GiNaC::ex &input = st[st.size() - 3].value, &result = st[st.size() - 2].value,
-                        &source = st.back().value;
+        const GiNaC::ex &input = st[st.size() - 3].value, &result = st[st.size() - 2].value, &source = st.back().value;
         form_comparison form = compare_forms(result, source, program.numbers);
         INFO(form.why);
         CHECK(form.same);

@@ -13,9 +13,9 @@
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "simplify/simplify.hpp"
 #include "rules/roots.hpp"
 #include "rules/structure.hpp"
+#include "simplify/simplify.hpp"
 
 namespace couplet::testing {
 

@@ -10,9 +10,9 @@
 using couplet::testing::run_cli;
 
 TEST_CASE("division by zero during evaluation is an error at the statement, not a crash", "[eval][cli]") {
-    for (const char* input : {"eval 1/3j(1,1,1;0,0,0)", "eval 3j(1,1,1;0,0,0)^-1", "eval 1/x at x=0",
-                              "eval 1/sum(m: 3j(1,1,1;m,-m,0))", "eval sqrt(1/3j(1,1,1;0,0,0))",
-                              "eval 1/(J-1) at J=1"}) {
+    for (const char* input :
+         {"eval 1/3j(1,1,1;0,0,0)", "eval 3j(1,1,1;0,0,0)^-1", "eval 1/x at x=0", "eval 1/sum(m: 3j(1,1,1;m,-m,0))",
+          "eval sqrt(1/3j(1,1,1;0,0,0))", "eval 1/(J-1) at J=1"}) {
         INFO(input);
         auto r = run_cli({"eval", "-e", input});
         CHECK(r.code == 2);

@@ -62,8 +62,8 @@ TEST_CASE("3j orthogonality over m1, m2 (DLMF 34.3.16)", "[eval]") {
     for_each_assignment(p, {"j1", "j2", "j3", "k3", "m3", "n3"}, 3, [&](const assignment& at) {
         auto v = [&](const char* n) { return at.at(p.sym(n)); };
         bool admissible_triangle = abs(v("j1") - v("j2")) <= v("j3") && v("j3") <= v("j1") + v("j2") &&
-                                   (v("j1") + v("j2") + v("j3")).is_integer() &&
-                                   abs(v("m3")) <= v("j3") && (v("j3") - v("m3")).is_integer();
+                                   (v("j1") + v("j2") + v("j3")).is_integer() && abs(v("m3")) <= v("j3") &&
+                                   (v("j3") - v("m3")).is_integer();
         bool expected_one = admissible_triangle && v("j3") == v("k3") && v("m3") == v("n3");
         INFO(describe(at));
         CHECK(p.sides[0].at(at) == number(expected_one ? 1L : 0L));
@@ -75,8 +75,9 @@ TEST_CASE("3j orthogonality over m1, m2 (DLMF 34.3.16)", "[eval]") {
 TEST_CASE("6j orthogonality summed over an angular momentum (DLMF 34.5.14)", "[eval]") {
     // sum_x (2x+1)(2p+1) {a b x; c d p}{c d x; a b q} = delta(p, q) when (a d p), (b c p)
     // are triads; x is bounded only by the triangles of the 6j symbols.
-    prepared p("(2*p+1) * sum(x : (2*x+1) * 6j{a, b, x; c, d, p} * 6j{c, d, x; a, b, q})\n"
-               "delta(p, q) * tri(a, d, p) * tri(b, c, p) * tri(a, b, p) * 0 + delta(p, q) * tri(a, d, p) * tri(b, c, p)");
+    prepared p(
+        "(2*p+1) * sum(x : (2*x+1) * 6j{a, b, x; c, d, p} * 6j{c, d, x; a, b, q})\n"
+        "delta(p, q) * tri(a, d, p) * tri(b, c, p) * tri(a, b, p) * 0 + delta(p, q) * tri(a, d, p) * tri(b, c, p)");
     int nonzero = 0;
     for_each_assignment(p, {"a", "b", "c", "d", "p", "q"}, 4, [&](const assignment& at) {
         number lhs = p.sides[0].at(at);
@@ -94,15 +95,17 @@ TEST_CASE("6j orthogonality summed over an angular momentum (DLMF 34.5.14)", "[e
 }
 
 TEST_CASE("a 9j equals its sum over x of three 6j symbols (DLMF 34.6.2)", "[eval]") {
-    prepared p("9j{a, b, c; d, e, f; g, h, i}\n"
-               "sum(x : (-1)^(2*x) * (2*x+1) * 6j{a, b, c; f, i, x} * 6j{d, e, f; b, x, h} * 6j{g, h, i; x, a, d})");
+    prepared p(
+        "9j{a, b, c; d, e, f; g, h, i}\n"
+        "sum(x : (-1)^(2*x) * (2*x+1) * 6j{a, b, c; f, i, x} * 6j{d, e, f; b, x, h} * 6j{g, h, i; x, a, d})");
     testing::admissible_points gen(34062, 6);
     int nonzero = 0;
     for (int n = 0; n < 1000; ++n) {
         assignment at;
         std::vector<int> twice = gen.ninej();
         int k = 0;
-        for (const char* name : {"a", "b", "c", "d", "e", "f", "g", "h", "i"}) at[p.sym(name)] = GiNaC::numeric(twice[k++], 2);
+        for (const char* name : {"a", "b", "c", "d", "e", "f", "g", "h", "i"})
+            at[p.sym(name)] = GiNaC::numeric(twice[k++], 2);
         number direct = p.sides[0].at(at);
         INFO(describe(at));
         CHECK(direct == p.sides[1].at(at));
@@ -117,8 +120,8 @@ TEST_CASE("Clebsch-Gordan agrees with its 3j form (DLMF 34.1.1)", "[eval]") {
     for_each_assignment(p, {"j1", "m1", "j2", "m2", "J", "M"}, 2, [&](const assignment& at) {
         auto v = [&](const char* n) { return at.at(p.sym(n)); };
         // The phase needs j1-j2+M integer, which every admissible triad implies; skip the rest.
-        if (!(v("j1") - v("m1")).is_integer() || !(v("j2") - v("m2")).is_integer() ||
-            !(v("J") - v("M")).is_integer() || !(v("j1") + v("j2") + v("J")).is_integer())
+        if (!(v("j1") - v("m1")).is_integer() || !(v("j2") - v("m2")).is_integer() || !(v("J") - v("M")).is_integer() ||
+            !(v("j1") + v("j2") + v("J")).is_integer())
             return;
         INFO(describe(at));
         CHECK(p.sides[0].at(at) == p.sides[1].at(at));

@@ -26,7 +26,8 @@ evaluation_limits by(sum_enumeration e) {
 struct both_ways {
     compiled_expression propagating, intervals;
     both_ways(const GiNaC::ex& e, const quantum_numbers& numbers)
-        : propagating(e, numbers, by(sum_enumeration::propagating)), intervals(e, numbers, by(sum_enumeration::intervals)) {}
+        : propagating(e, numbers, by(sum_enumeration::propagating)),
+          intervals(e, numbers, by(sum_enumeration::intervals)) {}
 };
 
 GiNaC::symbol sym(const lowered_program& p, const std::string& name) { return p.numbers.find(name)->symbol; }
@@ -154,7 +155,8 @@ TEST_CASE("a value that is not a multiple of 1/2 is evaluated with rationals", "
 TEST_CASE("an unbounded index is still reported by the propagating enumeration", "[eval][propagate]") {
     auto program = testing::lower_text("sum(x : (2*x + 1) * 3j(a, b, c; 0, 0, 0))");
     compiled_expression e(program.statements.back().value, program.numbers);
-    assignment at{{sym(program, "a"), GiNaC::numeric(1)}, {sym(program, "b"), GiNaC::numeric(1)},
+    assignment at{{sym(program, "a"), GiNaC::numeric(1)},
+                  {sym(program, "b"), GiNaC::numeric(1)},
                   {sym(program, "c"), GiNaC::numeric(0)}};
     CHECK_THROWS_WITH(e.at(at), Catch::Contains("nothing bounds the summation index 'x'"));
 }

@@ -92,7 +92,8 @@ TEST_CASE("exact: random expressions obey the field laws exactly", "[exact][numb
     const long radicands[] = {1, 2, 3, 5, 6, 10};
     auto random_number = [&] {
         number x;
-        for (int k = 0; k < 3; ++k) x += number(ratio(small(rng), 1 + std::abs(small(rng)))) * root(radicands[radicand_pick(rng)]);
+        for (int k = 0; k < 3; ++k)
+            x += number(ratio(small(rng), 1 + std::abs(small(rng)))) * root(radicands[radicand_pick(rng)]);
         return x;
     };
     for (int trial = 0; trial < 200; ++trial) {
@@ -112,7 +113,8 @@ TEST_CASE("exact: coprime_ratio agrees with CLN's reducing division", "[exact][n
     std::mt19937_64 rng(seed);
     for (int trial = 0; trial < 2000; ++trial) {
         const int bits = 1 + trial % 190;
-        cln::cl_I a = cln::ash(cln::cl_I(static_cast<unsigned long long>(rng())), bits) + static_cast<unsigned long long>(rng());
+        cln::cl_I a =
+            cln::ash(cln::cl_I(static_cast<unsigned long long>(rng())), bits) + static_cast<unsigned long long>(rng());
         cln::cl_I b = cln::ash(cln::cl_I(static_cast<unsigned long long>(rng())), bits / 2) + 1;
         const cln::cl_I g = cln::gcd(a, b);
         a = cln::exquo(a, g);

@@ -35,7 +35,8 @@ TEST_CASE("exact: to_string writes the couplet input syntax", "[exact][number][p
 }
 
 TEST_CASE("exact: to_decimal rounds correctly to significant digits", "[exact][number][print]") {
-    CHECK((-root(6) / 6).to_decimal(20) == "-0.40824829046386301637");  // from memory: 1/sqrt(6) = 0.4082482904638630163662...
+    CHECK((-root(6) / 6).to_decimal(20) ==
+          "-0.40824829046386301637");  // from memory: 1/sqrt(6) = 0.4082482904638630163662...
     CHECK(number().to_decimal(5) == "0");
     CHECK(number(ratio(1, 6)).to_decimal(5) == "0.16667");
     CHECK(number(ratio(1, 8)).to_decimal(2) == "0.13");  // an exact tie rounds up

@@ -62,8 +62,8 @@ TEST_CASE("exact: sign of a three-prime sum against decimal bounds 700 digits de
     // floor and ceiling of (sqrt2+sqrt3+sqrt5) 10^700, from 2600-digit CLN floats, bracket
     // the sum; the differences (~1e-700) are again beyond the float check.
     const auto format = cln::float_format(2600);
-    const cln::cl_F value = cln::sqrt(cln::cl_float(2, format)) + cln::sqrt(cln::cl_float(3, format)) +
-                            cln::sqrt(cln::cl_float(5, format));
+    const cln::cl_F value =
+        cln::sqrt(cln::cl_float(2, format)) + cln::sqrt(cln::cl_float(3, format)) + cln::sqrt(cln::cl_float(5, format));
     const cln::cl_I scale = cln::expt_pos(cln::cl_I(10), 700);
     const cln::cl_I below = cln::floor1(value * scale);
     const number sum = root(2) + root(3) + root(5);

@@ -32,27 +32,27 @@ TEST_CASE("exact: admissibility predicates", "[exact][admissibility]") {
 
 TEST_CASE("exact: 3j and Clebsch-Gordan vanish outside the selection rules", "[exact][admissibility]") {
     REQUIRE_FALSE(threej(2, 2, 2, 2, -2, 0).is_zero());
-    CHECK(threej(2, 2, 6, 0, 0, 0).is_zero());    // triangle
-    CHECK(threej(2, 2, 1, 0, 0, 0).is_zero());    // j1+j2+j3 half-odd
-    CHECK(threej(2, 2, 2, 4, -4, 0).is_zero());   // |m| > j
-    CHECK(threej(2, 2, 2, 1, -1, 0).is_zero());   // j-m half-odd
-    CHECK(threej(2, 2, 2, 2, 0, 0).is_zero());    // m1+m2+m3 != 0
-    CHECK(threej(-2, 2, 0, 0, 0, 0).is_zero());   // negative j
-    CHECK(threej(2, 2, 2, 0, 0, 0).is_zero());    // admissible, zero by 34.3.5 (J odd)
-    CHECK(clebsch_gordan(2, 2, 2, 0, 2, 0).is_zero());   // M != m1+m2
-    CHECK(clebsch_gordan(2, 2, 2, -2, 6, 0).is_zero());  // triangle
-    CHECK(clebsch_gordan(2, 2, 2, -2, -2, 0).is_zero()); // negative J
-    CHECK(clebsch_gordan(2, 1, 2, -1, 2, 0).is_zero());  // j-m half-odd
+    CHECK(threej(2, 2, 6, 0, 0, 0).is_zero());                // triangle
+    CHECK(threej(2, 2, 1, 0, 0, 0).is_zero());                // j1+j2+j3 half-odd
+    CHECK(threej(2, 2, 2, 4, -4, 0).is_zero());               // |m| > j
+    CHECK(threej(2, 2, 2, 1, -1, 0).is_zero());               // j-m half-odd
+    CHECK(threej(2, 2, 2, 2, 0, 0).is_zero());                // m1+m2+m3 != 0
+    CHECK(threej(-2, 2, 0, 0, 0, 0).is_zero());               // negative j
+    CHECK(threej(2, 2, 2, 0, 0, 0).is_zero());                // admissible, zero by 34.3.5 (J odd)
+    CHECK(clebsch_gordan(2, 2, 2, 0, 2, 0).is_zero());        // M != m1+m2
+    CHECK(clebsch_gordan(2, 2, 2, -2, 6, 0).is_zero());       // triangle
+    CHECK(clebsch_gordan(2, 2, 2, -2, -2, 0).is_zero());      // negative J
+    CHECK(clebsch_gordan(2, 1, 2, -1, 2, 0).is_zero());       // j-m half-odd
     CHECK(threej(LONG_MAX, 0, LONG_MAX, 0, 0, 0).is_zero());  // huge but inadmissible: no throw
     CHECK(clebsch_gordan(1, 1, 1, -1, 2, LONG_MIN).is_zero());
 }
 
 TEST_CASE("exact: 6j and 9j vanish when any triad fails", "[exact][admissibility]") {
     REQUIRE_FALSE(sixj(2, 2, 2, 2, 2, 2).is_zero());
-    CHECK(sixj(2, 2, 6, 2, 2, 2).is_zero());   // (a b c)
-    CHECK(sixj(2, 2, 2, 2, 6, 2).is_zero());   // (a e f)
-    CHECK(sixj(2, 2, 2, 6, 2, 2).is_zero());   // (d b f)
-    CHECK(sixj(2, 2, 2, 2, 2, 1).is_zero());   // parity of (a e f)
+    CHECK(sixj(2, 2, 6, 2, 2, 2).is_zero());  // (a b c)
+    CHECK(sixj(2, 2, 2, 2, 6, 2).is_zero());  // (a e f)
+    CHECK(sixj(2, 2, 2, 6, 2, 2).is_zero());  // (d b f)
+    CHECK(sixj(2, 2, 2, 2, 2, 1).is_zero());  // parity of (a e f)
     CHECK(sixj(-2, 2, 2, 2, 2, 2).is_zero());
     REQUIRE_FALSE(ninej(2, 2, 2, 2, 2, 2, 2, 2, 0).is_zero());
     CHECK(ninej(2, 2, 6, 2, 2, 2, 2, 2, 0).is_zero());  // row 1

@@ -92,8 +92,8 @@ void compare_with_gsl(const couplet::exact::number& exact, int status, const gsl
     if (difference > 1e-10 * std::fabs(value) && difference > 1e-14) {
         std::ostringstream args;
         for (int x : doubled) args << x << ' ';
-        FAIL("doubled arguments " << args.str() << ": exact " << exact.to_decimal(17) << " = " << exact
-                                  << ", GSL " << gsl.val << " +- " << gsl.err);
+        FAIL("doubled arguments " << args.str() << ": exact " << exact.to_decimal(17) << " = " << exact << ", GSL "
+                                  << gsl.val << " +- " << gsl.err);
     }
 }
 
@@ -121,8 +121,8 @@ TEST_CASE("exact: exact symbols agree with GSL 2.7 on random admissible argument
     for (int n = 0; n < 2500; ++n) {
         const auto s = pick.ninej();
         gsl_sf_result r;
-        const int status =
-            gsl_sf_coupling_9j_e(s[0], s[1], s[2], s[3], s[4], s[5], s[6], s[7], s[8], &r);  // GSL 2.7 gsl_sf_coupling_9j
+        const int status = gsl_sf_coupling_9j_e(s[0], s[1], s[2], s[3], s[4], s[5], s[6], s[7], s[8],
+                                                &r);  // GSL 2.7 gsl_sf_coupling_9j
         compare_with_gsl(couplet::exact::ninej(s[0], s[1], s[2], s[3], s[4], s[5], s[6], s[7], s[8]), status, r, s,
                          ninej_tally);
     }

@@ -28,8 +28,7 @@ bool admissible(long a, long b, long c, long d, long e, long f) {
 
 // Runs `check(a, b, c)` (doubled j1, j2, j3) over every triad up to 2j = limit whose 6j
 // {j1 j2 j3; lower(a, b, c)} is admissible; returns how many ran.
-int for_each_admissible(long limit, long l1, long dl2, long dl3,
-                        const std::function<void(long, long, long)>& check) {
+int for_each_admissible(long limit, long l1, long dl2, long dl3, const std::function<void(long, long, long)>& check) {
     int count = 0;
     for (long a = 0; a <= limit; ++a)
         for (long b = 0; b <= limit; ++b)
@@ -75,8 +74,8 @@ TEST_CASE("exact: DLMF 34.5.4: {j1 j2 j3; 1 j3-1 j2-1}", "[exact][wigner][dlmf]"
     const int n = for_each_admissible(24, 2, -2, -2, [](long a, long b, long c) {
         // (-1)^J sqrt(J(J+1)(J-2j1)(J-2j1-1) / ((2j2-1) 2j2 (2j2+1) (2j3-1) 2j3 (2j3+1)))
         const long J = (a + b + c) / 2;
-        const cln::cl_RA square = cln::cl_RA(I(J) * (J + 1) * (J - a) * (J - a - 1)) /
-                                  (I(b - 1) * b * (b + 1) * (c - 1) * c * (c + 1));
+        const cln::cl_RA square =
+            cln::cl_RA(I(J) * (J + 1) * (J - a) * (J - a - 1)) / (I(b - 1) * b * (b + 1) * (c - 1) * c * (c + 1));
         CHECK(sixj(a, b, c, 2, c - 2, b - 2) == signed_root(phase(J), square));
     });
     CHECK(n > 300);
@@ -110,8 +109,9 @@ TEST_CASE("exact: DLMF 34.5.7: {j1 j2 j3; 1 j3 j2}", "[exact][wigner][dlmf]") {
         // with j(j+1) = 2j (2j+2) / 4
         const long J = (a + b + c) / 2;
         const cln::cl_RA casimirs = cln::cl_RA(I(b) * (b + 2) + I(c) * (c + 2) - I(a) * (a + 2)) / 4;
-        const number expected = 2 * casimirs *
-                                signed_root(phase(J + 1), cln::cl_RA(1) / (I(b) * (b + 1) * (b + 2) * c * (c + 1) * (c + 2)));
+        const number expected =
+            2 * casimirs *
+            signed_root(phase(J + 1), cln::cl_RA(1) / (I(b) * (b + 1) * (b + 2) * c * (c + 1) * (c + 2)));
         CHECK(sixj(a, b, c, 2, c, b) == expected);
     });
     CHECK(n > 500);
@@ -125,14 +125,15 @@ TEST_CASE("exact: DLMF 34.5.1, 34.5.4 and 34.5.7 at large j", "[exact][wigner][d
     }
     {
         const long a = 9000, b = 10000, c = 7002, J = (a + b + c) / 2;
-        const cln::cl_RA square = cln::cl_RA(I(J) * (J + 1) * (J - a) * (J - a - 1)) /
-                                  (I(b - 1) * b * (b + 1) * (c - 1) * c * (c + 1));
+        const cln::cl_RA square =
+            cln::cl_RA(I(J) * (J + 1) * (J - a) * (J - a - 1)) / (I(b - 1) * b * (b + 1) * (c - 1) * c * (c + 1));
         CHECK(sixj(a, b, c, 2, c - 2, b - 2) == signed_root(phase(J), square));
     }
     {
         const long a = 12345, b = 9999, c = 5000, J = (a + b + c) / 2;
         const cln::cl_RA casimirs = cln::cl_RA(I(b) * (b + 2) + I(c) * (c + 2) - I(a) * (a + 2)) / 4;
         CHECK(sixj(a, b, c, 2, c, b) ==
-              2 * casimirs * signed_root(phase(J + 1), cln::cl_RA(1) / (I(b) * (b + 1) * (b + 2) * c * (c + 1) * (c + 2))));
+              2 * casimirs *
+                  signed_root(phase(J + 1), cln::cl_RA(1) / (I(b) * (b + 1) * (b + 2) * c * (c + 1) * (c + 2))));
     }
 }

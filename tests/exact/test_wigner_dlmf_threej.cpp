@@ -44,8 +44,8 @@ TEST_CASE("exact: DLMF 34.3.3: (j j 1; m -m-1 1)", "[exact][wigner][dlmf]") {
     for (long tj = 1; tj <= 60; ++tj)
         for (long tm = -tj; tm <= tj; tm += 2) {
             // (-1)^(j-m) sqrt(2 (j-m)(j+m+1) / (2j (2j+1) (2j+2))), with 2(j-m)(j+m+1) = (2j-2m)(2j+2m+2)/2
-            const cln::cl_RA square = cln::cl_RA(cln::cl_I(tj - tm) * (tj + tm + 2)) / 2 /
-                                      (cln::cl_I(tj) * (tj + 1) * (tj + 2));
+            const cln::cl_RA square =
+                cln::cl_RA(cln::cl_I(tj - tm) * (tj + tm + 2)) / 2 / (cln::cl_I(tj) * (tj + 1) * (tj + 2));
             const number expected = signed_root(phase((tj - tm) / 2), square);
             INFO("2j=" << tj << " 2m=" << tm);
             CHECK(threej(tj, tj, 2, tm, -tm - 2, 2) == expected);
@@ -60,8 +60,10 @@ TEST_CASE("exact: DLMF 34.3.5: (j1 j2 j3; 0 0 0)", "[exact][wigner][dlmf]") {
                 number expected;  // 0 for odd J
                 if (J % 2 == 0) {
                     // (-1)^(J/2) sqrt((J-2j1)!(J-2j2)!(J-2j3)!/(J+1)!) (J/2)! / ((J/2-j1)!(J/2-j2)!(J/2-j3)!)
-                    const cln::cl_RA square = cln::cl_RA(fact(J - 2 * j1) * fact(J - 2 * j2) * fact(J - 2 * j3)) / fact(J + 1);
-                    const cln::cl_RA factor = cln::cl_RA(fact(J / 2)) / (fact(J / 2 - j1) * fact(J / 2 - j2) * fact(J / 2 - j3));
+                    const cln::cl_RA square =
+                        cln::cl_RA(fact(J - 2 * j1) * fact(J - 2 * j2) * fact(J - 2 * j3)) / fact(J + 1);
+                    const cln::cl_RA factor =
+                        cln::cl_RA(fact(J / 2)) / (fact(J / 2 - j1) * fact(J / 2 - j2) * fact(J / 2 - j3));
                     expected = signed_root(phase(J / 2), square) * number(factor);
                 }
                 INFO("j = " << j1 << " " << j2 << " " << j3);

@@ -45,7 +45,8 @@ number ninej_of(const std::array<std::array<long, 3>, 3>& m) {
 
 }  // namespace
 
-TEST_CASE("exact: 3j: even permutations are free, odd ones and m -> -m cost (-1)^(j1+j2+j3)", "[exact][wigner][symmetry]") {
+TEST_CASE("exact: 3j: even permutations are free, odd ones and m -> -m cost (-1)^(j1+j2+j3)",
+          "[exact][wigner][symmetry]") {
     const unsigned seed = 338u + Catch::rngSeed();
     INFO("seed " << seed);
     picker pick(seed);
@@ -57,11 +58,11 @@ TEST_CASE("exact: 3j: even permutations are free, odd ones and m -> -m cost (-1)
         const number x = threej(a, b, c, ma, mb, mc);
         const int odd = phase((a + b + c) / 2);
         INFO("2j = " << a << " " << b << " " << c << ", 2m = " << ma << " " << mb << " " << mc);
-        CHECK(threej(b, c, a, mb, mc, ma) == x);        // DLMF 34.3.8
-        CHECK(threej(c, a, b, mc, ma, mb) == x);        // DLMF 34.3.8
-        CHECK(threej(b, a, c, mb, ma, mc) == odd * x);  // DLMF 34.3.9
-        CHECK(threej(a, c, b, ma, mc, mb) == odd * x);  // DLMF 34.3.9
-        CHECK(threej(c, b, a, mc, mb, ma) == odd * x);  // DLMF 34.3.9
+        CHECK(threej(b, c, a, mb, mc, ma) == x);           // DLMF 34.3.8
+        CHECK(threej(c, a, b, mc, ma, mb) == x);           // DLMF 34.3.8
+        CHECK(threej(b, a, c, mb, ma, mc) == odd * x);     // DLMF 34.3.9
+        CHECK(threej(a, c, b, ma, mc, mb) == odd * x);     // DLMF 34.3.9
+        CHECK(threej(c, b, a, mc, mb, ma) == odd * x);     // DLMF 34.3.9
         CHECK(threej(a, b, c, -ma, -mb, -mc) == odd * x);  // DLMF 34.3.10
         nonzero += !x.is_zero();
     }

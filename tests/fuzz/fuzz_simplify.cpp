@@ -16,7 +16,8 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     for (const char* command : {"simplify", "eval"}) {
         std::istringstream in(text);
         std::ostringstream out, err;
-        int code = couplet::cli::run({"couplet", command, "--time-limit", "5", "--max-terms", "5000", "-"}, in, out, err);
+        int code =
+            couplet::cli::run({"couplet", command, "--time-limit", "5", "--max-terms", "5000", "-"}, in, out, err);
         if (code == couplet::cli::internal_failure) std::abort();
     }
     return 0;

@@ -2,10 +2,10 @@
 // reduction of one statement must not borrow the pairing another statement made.
 #include <catch2/catch.hpp>
 
+#include "canonical/phase_reduction.hpp"
 #include "eval/evaluate.hpp"
 #include "model/fresh_index.hpp"
 #include "model/symbols.hpp"
-#include "canonical/phase_reduction.hpp"
 #include "support.hpp"
 
 using namespace couplet;
@@ -48,8 +48,9 @@ TEST_CASE("a projection's j in one statement does not pair it in the next", "[mo
 }
 
 TEST_CASE("a statement keeps the pairing its own columns make", "[model][phase]") {
-    const lowered_program p = testing::lower_text("3j(a, b, c; m1, m2, m3)*sum(x : 3j(d, d, 0; x, -x, 0))\n"
-                                                  "(-1)^(d-m1)*3j(d, e, f; 2*m1, -2*m1, 0)");
+    const lowered_program p = testing::lower_text(
+        "3j(a, b, c; m1, m2, m3)*sum(x : 3j(d, d, 0; x, -x, 0))\n"
+        "(-1)^(d-m1)*3j(d, e, f; 2*m1, -2*m1, 0)");
     const GiNaC::symbol a = named(p.numbers, "a"), m1 = named(p.numbers, "m1"), x = named(p.numbers, "x");
     REQUIRE(p.numbers.at(m1).owner);
     const quantum_numbers first = p.numbers.for_statement(p.statements[0].value);

@@ -46,9 +46,15 @@ inline const std::vector<network_graph>& network_corpus() {
         {"K(3,3) (9j)", 6, {{0, 3}, {0, 4}, {0, 5}, {1, 3}, {1, 4}, {1, 5}, {2, 3}, {2, 4}, {2, 5}}, {}},
         {"Moebius ladder of 8 vertices (12j, first kind)", 8, joined(ring(0, 8), rungs(4, 4)), {}},
         {"cube (12j, second kind)", 8, joined(joined(ring(0, 4), {{4, 5}, {5, 6}, {6, 7}, {7, 4}}), rungs(4, 4)), {}},
-        {"pentagonal prism (15j)", 10, joined(joined(ring(0, 5), {{5, 6}, {6, 7}, {7, 8}, {8, 9}, {9, 5}}), rungs(5, 5)), {}},
+        {"pentagonal prism (15j)",
+         10,
+         joined(joined(ring(0, 5), {{5, 6}, {6, 7}, {7, 8}, {8, 9}, {9, 5}}), rungs(5, 5)),
+         {}},
         {"Moebius ladder of 10 vertices (15j)", 10, joined(ring(0, 10), rungs(5, 5)), {}},
-        {"Petersen graph (15j)", 10, joined(joined(ring(0, 5), {{5, 7}, {7, 9}, {9, 6}, {6, 8}, {8, 5}}), rungs(5, 5)), {}},
+        {"Petersen graph (15j)",
+         10,
+         joined(joined(ring(0, 5), {{5, 7}, {7, 9}, {9, 6}, {6, 8}, {8, 5}}), rungs(5, 5)),
+         {}},
     };
     return corpus;
 }

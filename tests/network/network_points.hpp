@@ -15,10 +15,10 @@
 #include <set>
 #include <vector>
 
+#include "canonical/symmetries.hpp"
 #include "eval/evaluate.hpp"
 #include "model/quantum.hpp"
 #include "model/symbols.hpp"
-#include "canonical/symmetries.hpp"
 
 namespace couplet::testing {
 
@@ -61,8 +61,10 @@ public:
                 bool ok = true;
                 for (std::size_t k = 0; k < m.size() && ok; ++k) {
                     auto it = owner_.find(static_cast<int>(k));
-                    if (it == owner_.end()) ok = false;
-                    else m[k] = -j[it->second] + 2 * uniform(0, j[it->second]);
+                    if (it == owner_.end())
+                        ok = false;
+                    else
+                        m[k] = -j[it->second] + 2 * uniform(0, j[it->second]);
                 }
                 if (!ok) break;
                 if (tries < 199 && !rows_vanish(m)) continue;
@@ -101,7 +103,10 @@ private:
             bool ok = true;
             for (const auto& t : triads_) {
                 if (j[t[0]] < 0 || j[t[1]] < 0 || j[t[2]] < 0) continue;
-                if (!fits(j[t[0]], j[t[1]], j[t[2]])) { ok = false; break; }
+                if (!fits(j[t[0]], j[t[1]], j[t[2]])) {
+                    ok = false;
+                    break;
+                }
             }
             if (ok && assign_angular(j, k + 1)) return true;
         }
@@ -138,7 +143,7 @@ struct agreement {
 };
 
 inline agreement network_agreement_at_points(const GiNaC::ex& lhs, const GiNaC::ex& rhs, const quantum_numbers& numbers,
-                                   unsigned seed, int samples, int twice_max) {
+                                             unsigned seed, int samples, int twice_max) {
     compiled_expression left(lhs, numbers), right(rhs, numbers);
     network_points points(lhs, numbers, seed, twice_max);
     agreement a;

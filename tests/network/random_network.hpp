@@ -10,8 +10,8 @@
 #include <string>
 #include <vector>
 
-#include "model/symbols.hpp"
 #include "model/quantum.hpp"
+#include "model/symbols.hpp"
 
 namespace couplet::testing {
 
@@ -51,8 +51,10 @@ inline random_network make_random_network(std::mt19937& rng, int min_vertices, i
             bottom[slots[k + end]] = (plus ? "" : "-") + m;
         }
         int kind = every_line_metric ? uniform(0, 7) : uniform(0, 9);
-        if (kind < 8) phases.push_back(j + (kind % 2 ? "-" : "+") + m);  // the metric
-        else if (kind == 8) phases.push_back("2*" + m);                  // no metric, m-free class
+        if (kind < 8)
+            phases.push_back(j + (kind % 2 ? "-" : "+") + m);  // the metric
+        else if (kind == 8)
+            phases.push_back("2*" + m);  // no metric, m-free class
     }
     std::string body;
     for (int v = 0; v < n; ++v) {

@@ -85,8 +85,8 @@ TEST_CASE("3j completeness: sums it does not cover stay sums and stay correct", 
 
 TEST_CASE("3j completeness: a projection some sum binds is not turned into a delta", "[network][completeness]") {
     // The two 3j are what bound the sum over m; the deltas alone would leave it unbounded.
-    auto r = testing::run_cli({"simplify", "--steps", "-e",
-                               "sum(m : sum(J, M : (2*J+1) * 3j(a, b, J; m, mb, M) * 3j(a, b, J; na, nb, M)))"});
+    auto r = testing::run_cli(
+        {"simplify", "--steps", "-e", "sum(m : sum(J, M : (2*J+1) * 3j(a, b, J; m, mb, M) * 3j(a, b, J; na, nb, M)))"});
     INFO("stderr: " << r.err);
     REQUIRE(r.code == 0);
     CHECK(r.out.find("DLMF 34.3.17") == std::string::npos);
@@ -95,7 +95,8 @@ TEST_CASE("3j completeness: a projection some sum binds is not turned into a del
 TEST_CASE("a flat sum over J, M and projections is reduced as the iterated sum", "[network][completeness]") {
     // DLMF 34.3.16 summed over the m's gives tri(a, b, J); then sum over J of (2J+1) over the
     // triangle is (2a+1)(2b+1) (common practice, no source).
-    auto s = simplify_and_compare("sum(J, M, m1, m2 : (2*J+1) * 3j(a, b, J; m1, m2, M) * 3j(J, a, b; M, m1, m2))", 3419);
+    auto s =
+        simplify_and_compare("sum(J, M, m1, m2 : (2*J+1) * 3j(a, b, J; m1, m2, M) * 3j(J, a, b; M, m1, m2))", 3419);
     INFO("result: " << s.result);
     CHECK(s.result == "(2*a+1)*(2*b+1)");
     CHECK(s.agreement.equal == s.agreement.points);

@@ -26,8 +26,8 @@ simplified simplify_and_compare(const std::string& input, unsigned seed, int sam
     REQUIRE(r.code == 0);
     std::string result = nlohmann::json::parse(r.out).at("result");
     auto program = testing::lower_text(input + "\n" + result);
-    auto a = testing::network_agreement_at_points(program.statements[0].value, program.statements[1].value, program.numbers,
-                                        seed, samples, twice_max);
+    auto a = testing::network_agreement_at_points(program.statements[0].value, program.statements[1].value,
+                                                  program.numbers, seed, samples, twice_max);
     return {result, a};
 }
 

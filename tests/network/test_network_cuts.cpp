@@ -5,13 +5,13 @@
 
 #include <iostream>
 
+#include "canonical/phase_reduction.hpp"
+#include "canonical/symmetries.hpp"
 #include "model/fresh_index.hpp"
 #include "model/normalize.hpp"
 #include "network/cut.hpp"
-#include "network/rewrites.hpp"
 #include "network/reduce.hpp"
-#include "canonical/symmetries.hpp"
-#include "canonical/phase_reduction.hpp"
+#include "network/rewrites.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"
 #include "support.hpp"
@@ -70,7 +70,8 @@ void check_cuts(const prepared& p, int size, unsigned seed, tally& t, int sample
         auto s = network::separate(*p.term, c, fresh);
         if (!s) continue;
         ++t.separated;
-        auto a = testing::network_agreement_at_points(p.input, network::joined(*s), p.program.numbers, seed++, samples, 3);
+        auto a =
+            testing::network_agreement_at_points(p.input, network::joined(*s), p.program.numbers, seed++, samples, 3);
         CHECK(a.equal == a.points);
         t.points += a.points;
         t.equal += a.equal;
@@ -81,13 +82,12 @@ void check_cuts(const prepared& p, int size, unsigned seed, tally& t, int sample
 // K(3,3) without the edge (2,5), whose vertices 2 and 5 lead to a second part {6, 7} joined by
 // one line and carrying the two open lines: a two-line cut.
 const std::vector<std::pair<int, int>> cut_of_two_edges = {{0, 3}, {0, 4}, {0, 5}, {1, 3}, {1, 4}, {1, 5},
-                                                          {2, 3}, {2, 4}, {2, 6}, {5, 7}, {6, 7}};
+                                                           {2, 3}, {2, 4}, {2, 6}, {5, 7}, {6, 7}};
 
 // The cube without the rung (3, 7), whose vertices 3 and 7 lead to {8, 9} as above: girth 4
 // and no 9j piece, so no closing move applies before the cut.
-const std::vector<std::pair<int, int>> cube_cut_of_two_edges = {{0, 1}, {1, 2}, {2, 3}, {3, 0}, {4, 5}, {5, 6},
-                                                               {6, 7}, {7, 4}, {0, 4}, {1, 5}, {2, 6},
-                                                               {3, 8}, {7, 9}, {8, 9}};
+const std::vector<std::pair<int, int>> cube_cut_of_two_edges = {{0, 1}, {1, 2}, {2, 3}, {3, 0}, {4, 5}, {5, 6}, {6, 7},
+                                                                {7, 4}, {0, 4}, {1, 5}, {2, 6}, {3, 8}, {7, 9}, {8, 9}};
 
 }  // namespace
 
@@ -176,8 +176,10 @@ TEST_CASE("the cut fails its check without the phase the vertex rules move acros
         REQUIRE(s);
         auto a = testing::network_agreement_at_points(p.input, network::joined(*s), p.program.numbers, 12, 60, 3);
         CHECK(a.nonzero > 5);
-        if (keep) CHECK(a.equal == a.points);
-        else CHECK(a.equal < a.points);
+        if (keep)
+            CHECK(a.equal == a.points);
+        else
+            CHECK(a.equal < a.points);
     }
 }
 

@@ -4,9 +4,9 @@
 
 #include <iostream>
 
-#include "simplify/simplify.hpp"
 #include "network_points.hpp"
 #include "random_network.hpp"
+#include "simplify/simplify.hpp"
 #include "support.hpp"
 
 using namespace couplet;
@@ -41,10 +41,10 @@ TEST_CASE("random networks of 2 to 10 vertices reduce without a single mismatch"
         nonzero += a.nonzero;
         ++networks;
     }
-    std::cout << "random networks: " << networks << " (" << closed << " without m-sums, " << partly
-              << " with fewer, " << unreduced << " unreduced; " << proper_with_msum << " of " << proper
-              << " proper ones with an m-sum left), " << points << " points (" << nonzero << " nonzero), "
-              << mismatches << " mismatches\n";
+    std::cout << "random networks: " << networks << " (" << closed << " without m-sums, " << partly << " with fewer, "
+              << unreduced << " unreduced; " << proper_with_msum << " of " << proper
+              << " proper ones with an m-sum left), " << points << " points (" << nonzero << " nonzero), " << mismatches
+              << " mismatches\n";
     CHECK(mismatches == 0);
     // Not every proper network is reduced to the end yet (1-4 of 250 keep an m-sum, the count
     // varying with GiNaC's term order; 54-63 before deltas on negated projections were resolved

@@ -23,8 +23,9 @@ network::term_analysis analyze(const std::string& text) {
 
 TEST_CASE("a triangle with three open ends: three vertices, three lines, three open ends", "[network][term]") {
     // Common practice, no source: the Yutsis picture of a sum of three 3j pairwise sharing an m.
-    auto a = analyze("sum(u1, u2, u3 : (-1)^(u1 + u2 + u3 + l1 + l2 + l3) * 7 * 6j{a, b, c; d, e, f}"
-                     " * 3j(j1, l2, l3; m1, u2, -u3) * 3j(l1, j2, l3; -u1, m2, u3) * 3j(l1, l2, j3; u1, -u2, m3))");
+    auto a = analyze(
+        "sum(u1, u2, u3 : (-1)^(u1 + u2 + u3 + l1 + l2 + l3) * 7 * 6j{a, b, c; d, e, f}"
+        " * 3j(j1, l2, l3; m1, u2, -u3) * 3j(l1, j2, l3; -u1, m2, u3) * 3j(l1, l2, j3; u1, -u2, m3))");
     REQUIRE(a.term);
     CHECK(a.term->threejs.size() == 3);
     CHECK(a.term->lines.size() == 3);
@@ -49,8 +50,8 @@ TEST_CASE("a squared 3j counts twice and a loop joins a vertex to itself", "[net
 }
 
 TEST_CASE("terms that are not networks say why", "[network][term]") {
-    CHECK_FALSE(analyze("sum(m : 3j(a, b, c; m, M, -m - M))").term);          // a mixed entry
-    CHECK_FALSE(analyze("sum(m : 3j(a, b, c; m, M, N))").term);               // one slot only
+    CHECK_FALSE(analyze("sum(m : 3j(a, b, c; m, M, -m - M))").term);                     // a mixed entry
+    CHECK_FALSE(analyze("sum(m : 3j(a, b, c; m, M, N))").term);                          // one slot only
     CHECK_FALSE(analyze("sum(m : 3j(a, b, c; m, M, N) * 3j(a, b, c; m, m, N) )").term);  // three slots
     CHECK_FALSE(analyze("sum(m : delta(m, M) * 3j(a, b, c; m, M, N) * 3j(a, b, c; m, M, N))").term);
     auto a = analyze("sum(m : 3j(a, b, c; m, M, N))");

@@ -16,8 +16,7 @@ namespace {
 
 const cln::cl_RA half = cln::cl_RA(1) / 2;
 
-const linear_form a = var("a"), b = var("b"), c = var("c"), j = var("j"), m = var("m"), l = var("l"),
-                  s = var("s");
+const linear_form a = var("a"), b = var("b"), c = var("c"), j = var("j"), m = var("m"), l = var("l"), s = var("s");
 
 context triad_abc() {
     context ctx;
@@ -64,8 +63,8 @@ TEST_CASE("phase: parity declarations fold (-1)^(2j)", "[phase]") {
     context ctx;
     ctx.declare_angular("l", parity::integer);
     ctx.declare_angular("s", parity::half_odd);
-    CHECK(ctx.canonical(2 * l) == linear_form());        // common practice, no source
-    CHECK(ctx.canonical(2 * s) == linear_form(1));       // common practice, no source
+    CHECK(ctx.canonical(2 * l) == linear_form());   // common practice, no source
+    CHECK(ctx.canonical(2 * s) == linear_form(1));  // common practice, no source
     CHECK(ctx.canonical(2 * s + 2 * l + 1) == linear_form());
     CHECK(ctx.is_integer(l));
     CHECK(ctx.is_integer(s + half));

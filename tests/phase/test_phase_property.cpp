@@ -75,7 +75,10 @@ struct scheme {
     std::string describe() const {
         std::ostringstream out;
         for (std::size_t i = 0; i < angular; ++i)
-            out << names[i] << (parities[i] == parity::integer ? ":int " : parities[i] == parity::half_odd ? ":half " : " ");
+            out << names[i]
+                << (parities[i] == parity::integer    ? ":int "
+                    : parities[i] == parity::half_odd ? ":half "
+                                                      : " ");
         for (std::size_t i = angular; i < names.size(); ++i) out << names[i] << " of " << owners[i - angular] << "; ";
         for (const auto& t : triads) out << "triad(" << t[0] << "," << t[1] << "," << t[2] << ") ";
         for (const auto& z : msums) out << "zero(" << z[0] << "," << z[1] << "," << z[2] << ") ";
@@ -142,13 +145,16 @@ struct condition {
     std::size_t last = 0;
     bool holds(const std::vector<int>& u) const {
         switch (kind) {
-            case integer: return mod(forms[0].at(u), 4) == 0;
-            case zero: return forms[0].at(u) == 0;
+            case integer:
+                return mod(forms[0].at(u), 4) == 0;
+            case zero:
+                return forms[0].at(u) == 0;
             case triangle: {
                 const int x = forms[0].at(u), y = forms[1].at(u), z = forms[2].at(u);
                 return x >= 0 && y >= 0 && z >= 0 && z <= x + y && std::abs(x - y) <= z;
             }
-            case within: return forms[1].at(u) >= std::abs(forms[0].at(u));
+            case within:
+                return forms[1].at(u) >= std::abs(forms[0].at(u));
         }
         return false;
     }
@@ -333,7 +339,8 @@ linear_form random_exponent(generator& g, const scheme& s) {
         x += cln::cl_RA(coefficient) * pieces[piece];
     }
     if (g.chance(30)) {
-        static const cln::cl_RA noise[6] = {half, -half, cln::cl_RA(1), cln::cl_RA(-1), cln::cl_RA(3) / 2, cln::cl_RA(2)};
+        static const cln::cl_RA noise[6] = {half,         -half, cln::cl_RA(1), cln::cl_RA(-1), cln::cl_RA(3) / 2,
+                                            cln::cl_RA(2)};
         const cln::cl_RA& amount = noise[g.below(6)];
         const auto name = static_cast<std::size_t>(g.below(static_cast<int>(s.names.size())));
         x += amount * var(s.names[name]);
@@ -395,9 +402,7 @@ exhaustive_judgement judge(const std::vector<std::vector<int>>& points, const qu
         j.y_integer = j.y_integer && mod(vy, 4) == 0;
         same_sign = same_sign && mod(vx - vy, 8) == 0;
     }
-    j.result = !(j.x_integer && j.y_integer) ? verdict::not_integer
-               : same_sign                    ? verdict::equal
-                                              : verdict::not_equal;
+    j.result = !(j.x_integer && j.y_integer) ? verdict::not_integer : same_sign ? verdict::equal : verdict::not_equal;
     return j;
 }
 
@@ -489,9 +494,9 @@ TEST_CASE("phase: verdicts agree with exhaustive evaluation over j <= 3", "[phas
     const int skipped = skipped_unsatisfiable + skipped_bounded + skipped_large;
     std::ostringstream summary;
     summary << "phase property: " << checked << " pairs over " << schemes - skipped << " schemes; skipped "
-            << skipped_unsatisfiable << " unsatisfiable, " << skipped_bounded << " empty below j = 3, "
-            << skipped_large << " oversized; equal " << seen_equal << ", not equal " << seen_not_equal
-            << ", not integer " << seen_not_integer << "; judged up to j = 6 instead " << bound_artifacts
+            << skipped_unsatisfiable << " unsatisfiable, " << skipped_bounded << " empty below j = 3, " << skipped_large
+            << " oversized; equal " << seen_equal << ", not equal " << seen_not_equal << ", not integer "
+            << seen_not_integer << "; judged up to j = 6 instead " << bound_artifacts
             << "; witnesses inside the inequalities " << witnesses_inside_inequalities << "/" << witnesses;
     INFO(summary.str());
     CHECK(schemes - skipped >= 600);

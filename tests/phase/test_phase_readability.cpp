@@ -119,14 +119,16 @@ void check_all_classes(const context& ctx, const std::vector<std::vector<int>>& 
         }
         // Every member prints alike (a sample of them; all of them for the small classes).
         const std::size_t step = members.size() > 16 ? members.size() / 16 : 1;
-        for (std::size_t k = 0; k < members.size(); k += step) CHECK(ctx.canonical(to_form(members[k], names)) == printed);
+        for (std::size_t k = 0; k < members.size(); k += step)
+            CHECK(ctx.canonical(to_form(members[k], names)) == printed);
     }
     CHECK(exact_classes > 0);
     INFO("classes: " << exact_classes << " exact, " << long_classes << " beyond four terms");
 }
 
 // All u in the box with each coordinate in [lo, hi), filtered.
-std::vector<std::vector<int>> box(std::size_t n, int lo, int hi, const std::function<bool(const std::vector<int>&)>& keep) {
+std::vector<std::vector<int>> box(std::size_t n, int lo, int hi,
+                                  const std::function<bool(const std::vector<int>&)>& keep) {
     std::vector<std::vector<int>> out;
     std::vector<int> u(n, lo);
     for (;;) {
@@ -153,8 +155,8 @@ TEST_CASE("phase: canonical is the most readable form, parities and a projection
     ctx.declare_angular("l", parity::integer);
     ctx.declare_angular("s", parity::half_odd);
     check_all_classes(ctx, box(4, 0, 4, [](const std::vector<int>& u) {
-        return (u[0] - u[1]) % 2 == 0 && u[2] % 2 == 0 && u[3] % 2 == 1;
-    }));
+                          return (u[0] - u[1]) % 2 == 0 && u[2] % 2 == 0 && u[3] % 2 == 1;
+                      }));
 }
 
 TEST_CASE("phase: canonical is the most readable form, a 3j", "[phase]") {
@@ -167,8 +169,8 @@ TEST_CASE("phase: canonical is the most readable form, a 3j", "[phase]") {
     std::vector<std::vector<int>> points;
     for (auto u : box(5, -4, 4, [](const std::vector<int>& v) { return v[0] >= 0 && v[1] >= 0 && v[2] >= 0; })) {
         u.push_back(-u[3] - u[4]);
-        const bool ok = (u[0] + u[1] + u[2]) % 2 == 0 && (u[0] - u[3]) % 2 == 0 && (u[1] - u[4]) % 2 == 0 &&
-                        (u[2] - u[5]) % 2 == 0;
+        const bool ok =
+            (u[0] + u[1] + u[2]) % 2 == 0 && (u[0] - u[3]) % 2 == 0 && (u[1] - u[4]) % 2 == 0 && (u[2] - u[5]) % 2 == 0;
         if (ok) points.push_back(u);
     }
     check_all_classes(ctx, points);

@@ -15,15 +15,24 @@ public:
     std::string expression(int depth = 3) {
         if (depth <= 0) return leaf();
         switch (pick(9)) {
-            case 0: return expression(depth - 1) + " + " + expression(depth - 1);
-            case 1: return expression(depth - 1) + " - " + term(depth - 1);
-            case 2: return term(depth - 1) + "*" + term(depth - 1);
-            case 3: return term(depth - 1) + "/(2*" + jname() + "+1)";
-            case 4: return "(-1)^(" + jform() + "+" + jform() + ")*" + term(depth - 1);
-            case 5: return "sqrt(2*" + jname() + "+1)*" + term(depth - 1);
-            case 6: return "(" + expression(depth - 1) + ")^2";
-            case 7: return summed(depth - 1);
-            default: return "-" + term(depth - 1);
+            case 0:
+                return expression(depth - 1) + " + " + expression(depth - 1);
+            case 1:
+                return expression(depth - 1) + " - " + term(depth - 1);
+            case 2:
+                return term(depth - 1) + "*" + term(depth - 1);
+            case 3:
+                return term(depth - 1) + "/(2*" + jname() + "+1)";
+            case 4:
+                return "(-1)^(" + jform() + "+" + jform() + ")*" + term(depth - 1);
+            case 5:
+                return "sqrt(2*" + jname() + "+1)*" + term(depth - 1);
+            case 6:
+                return "(" + expression(depth - 1) + ")^2";
+            case 7:
+                return summed(depth - 1);
+            default:
+                return "-" + term(depth - 1);
         }
     }
 
@@ -46,54 +55,74 @@ private:
     }
     std::string jform() {
         switch (pick(4)) {
-            case 0: return jname() + "+1/2";
-            case 1: return jname() + "-1";
-            case 2: return "2*" + jname();
-            default: return jname();
+            case 0:
+                return jname() + "+1/2";
+            case 1:
+                return jname() + "-1";
+            case 2:
+                return "2*" + jname();
+            default:
+                return jname();
         }
     }
     std::string mform() {
         switch (pick(4)) {
-            case 0: return "-" + mname();
-            case 1: return mname() + "+1";
-            case 2: return mname() + "-" + mname();
-            default: return mname();
+            case 0:
+                return "-" + mname();
+            case 1:
+                return mname() + "+1";
+            case 2:
+                return mname() + "-" + mname();
+            default:
+                return mname();
         }
     }
     std::string cg_atom(bool projection) {
         switch (pick(4)) {
-            case 0: return number();
-            case 1: return "(" + (projection ? mform() : jform()) + ")";
-            case 2: return projection ? "-" + mname() : jname();
-            default: return projection ? mname() : jname();
+            case 0:
+                return number();
+            case 1:
+                return "(" + (projection ? mform() : jform()) + ")";
+            case 2:
+                return projection ? "-" + mname() : jname();
+            default:
+                return projection ? mname() : jname();
         }
     }
 
     std::string leaf() {
         switch (pick(9)) {
-            case 0: return number();
-            case 1: return jname();
-            case 2: return "3j(" + jform() + ", " + jname() + ", " + jform() + "; " + mform() + ", " + mform() +
-                           ", " + mname() + ")";
-            case 3: return "6j{" + jname() + ", " + jform() + ", " + jname() + "; " + jname() + ", " + jname() +
-                           ", " + jform() + "}";
+            case 0:
+                return number();
+            case 1:
+                return jname();
+            case 2:
+                return "3j(" + jform() + ", " + jname() + ", " + jform() + "; " + mform() + ", " + mform() + ", " +
+                       mname() + ")";
+            case 3:
+                return "6j{" + jname() + ", " + jform() + ", " + jname() + "; " + jname() + ", " + jname() + ", " +
+                       jform() + "}";
             case 4: {
                 std::string s = "9j{";
                 for (int k = 0; k < 9; ++k) s += (k == 0 ? "" : k % 3 == 0 ? "; " : ", ") + jname();
                 return s + "}";
             }
-            case 5: return "<" + cg_atom(false) + " " + cg_atom(true) + ", " + cg_atom(false) + " " + cg_atom(true) +
-                           " | " + cg_atom(false) + " " + cg_atom(true) + ">";
-            case 6: return "delta(" + jname() + ", " + jform() + ")";
-            case 7: return "tri(" + jname() + ", " + jname() + ", " + jform() + ")";
-            default: return "(-1)^(" + jform() + "-" + mname() + ")";
+            case 5:
+                return "<" + cg_atom(false) + " " + cg_atom(true) + ", " + cg_atom(false) + " " + cg_atom(true) +
+                       " | " + cg_atom(false) + " " + cg_atom(true) + ">";
+            case 6:
+                return "delta(" + jname() + ", " + jform() + ")";
+            case 7:
+                return "tri(" + jname() + ", " + jname() + ", " + jform() + ")";
+            default:
+                return "(-1)^(" + jform() + "-" + mname() + ")";
         }
     }
 
     std::string summed(int depth) {
         std::string m = mname();
-        return "sum(" + m + " : 3j(" + jname() + ", " + jname() + ", " + jname() + "; " + m + ", -" + m +
-               ", 0)*" + term(depth) + ")";
+        return "sum(" + m + " : 3j(" + jname() + ", " + jname() + ", " + jname() + "; " + m + ", -" + m + ", 0)*" +
+               term(depth) + ")";
     }
 
     std::mt19937 rng_;

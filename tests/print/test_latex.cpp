@@ -1,10 +1,10 @@
 // LaTeX output: safe identifiers, the amsmath forms, and a generated document that compiles.
 #include <catch2/catch.hpp>
 
+#include <unistd.h>
 #include <cstdlib>
 #include <filesystem>
 #include <fstream>
-#include <unistd.h>
 
 #include "print/print.hpp"
 #include "print/random_source.hpp"
@@ -85,8 +85,8 @@ TEST_CASE("a generated LaTeX document compiles with pdflatex", "[print][latex][p
         std::ofstream f(dir / "doc.tex");
         f << r.out;
     }
-    std::string cmd = "cd '" + dir.string() +
-                      "' && pdflatex -interaction=nonstopmode -halt-on-error doc.tex > pdflatex.out 2>&1";
+    std::string cmd =
+        "cd '" + dir.string() + "' && pdflatex -interaction=nonstopmode -halt-on-error doc.tex > pdflatex.out 2>&1";
     int status = std::system(cmd.c_str());
     if (status != 0) {
         std::ifstream log(dir / "pdflatex.out");

@@ -5,11 +5,11 @@
 // used by name.
 #include <catch2/catch.hpp>
 
+#include <unistd.h>
 #include <cstdlib>
 #include <filesystem>
 #include <fstream>
 #include <regex>
-#include <unistd.h>
 
 #include "corpus/textbook_corpus.hpp"
 #include "support.hpp"
@@ -34,8 +34,8 @@ typeset compile(const std::string& document, const std::string& name) {
         f << document;
     }
     typeset t;
-    const std::string cmd = "cd '" + dir.string() +
-                            "' && pdflatex -interaction=nonstopmode -halt-on-error doc.tex > pdflatex.out 2>&1";
+    const std::string cmd =
+        "cd '" + dir.string() + "' && pdflatex -interaction=nonstopmode -halt-on-error doc.tex > pdflatex.out 2>&1";
     t.status = std::system(cmd.c_str());
     std::ifstream log(dir / "doc.log");
     t.log.assign(std::istreambuf_iterator<char>(log), std::istreambuf_iterator<char>());
@@ -127,8 +127,8 @@ TEST_CASE("checks in LaTeX: = with the evidence, \\neq with the diagnosis", "[pr
     CHECK(fails.code == 1);
     CHECK(fails.out.find("\\neq") != std::string::npos);
     CHECK(fails.out.find("holds after multiplying the right side by } (-1)^{a+b+c}") != std::string::npos);
-    auto holds = run_cli({"latex", "--fragment", "-e",
-                          "check 3j(a, b, c; ma, mb, mc) == (-1)^(a+b+c) * 3j(b, a, c; mb, ma, mc)"});
+    auto holds = run_cli(
+        {"latex", "--fragment", "-e", "check 3j(a, b, c; ma, mb, mc) == (-1)^(a+b+c) * 3j(b, a, c; mb, ma, mc)"});
     CHECK(holds.code == 0);
     CHECK(holds.out.find("\\neq") == std::string::npos);
     CHECK((holds.out.find("(proved; checked exactly at") != std::string::npos ||

@@ -9,9 +9,7 @@ using namespace couplet;
 
 namespace {
 
-bool same_expression(const GiNaC::ex& a, const GiNaC::ex& b) {
-    return a.is_equal(b) || (a - b).expand().is_zero();
-}
+bool same_expression(const GiNaC::ex& a, const GiNaC::ex& b) { return a.is_equal(b) || (a - b).expand().is_zero(); }
 
 }  // namespace
 
@@ -40,8 +38,9 @@ TEST_CASE("printing then parsing gives back the expression (300 generated cases)
 
 TEST_CASE("printing is independent of GiNaC's internal term order", "[print]") {
     // Same expression built in two different orders prints identically.
-    auto q = testing::lower_text("a + b*c - 3j(a, b, c; ma, mb, mc) + 1/2\n"
-                                 "1/2 - 3j(a, b, c; ma, mb, mc) + c*b + a");
+    auto q = testing::lower_text(
+        "a + b*c - 3j(a, b, c; ma, mb, mc) + 1/2\n"
+        "1/2 - 3j(a, b, c; ma, mb, mc) + c*b + a");
     CHECK(to_text(q.statements[0].value) == to_text(q.statements[1].value));
     CHECK(to_text(q.statements[0].value) == "a + b*c - 3j(a, b, c; ma, mb, mc) + 1/2");
 }

@@ -7,9 +7,9 @@
 #include <string>
 #include <vector>
 
+#include "jsum_check.hpp"
 #include "rules/engine.hpp"
 #include "simplify/simplify.hpp"
-#include "jsum_check.hpp"
 #include "support.hpp"
 
 namespace couplet::testing {
@@ -33,8 +33,8 @@ struct simplified {
 // Runs the command line on `declarations` + `input` and compares input and output exactly.
 // `verify` off for inputs whose single phase factors are no integers where a triangle fails: the
 // command line's own check refuses to evaluate those; this test compares exactly instead.
-inline simplified simplify_and_compare(const std::string& declarations, const std::string& input,
-                                       bool verify = true, int points = 120) {
+inline simplified simplify_and_compare(const std::string& declarations, const std::string& input, bool verify = true,
+                                       int points = 120) {
     std::vector<std::string> args{"simplify", "-e", declarations + input};
     if (!verify) args.push_back("--no-verify");
     auto r = run_cli(args);

@@ -27,9 +27,8 @@ inline std::vector<GiNaC::ex> bound_indices(const GiNaC::ex& e) {
     return out;
 }
 
-inline sample_report compare_at_points(const GiNaC::ex& input, const GiNaC::ex& output,
-                                       const quantum_numbers& numbers, unsigned seed, int points,
-                                       int twice_max = 8) {
+inline sample_report compare_at_points(const GiNaC::ex& input, const GiNaC::ex& output, const quantum_numbers& numbers,
+                                       unsigned seed, int points, int twice_max = 8) {
     std::vector<GiNaC::ex> bound = bound_indices(input);
     auto is_bound = [&](const GiNaC::ex& s) {
         for (const GiNaC::ex& b : bound)
@@ -65,8 +64,8 @@ inline sample_report compare_at_points(const GiNaC::ex& input, const GiNaC::ex& 
                 GiNaC::numeric a = GiNaC::ex_to<GiNaC::numeric>(t[0].subs(values));
                 GiNaC::numeric b = GiNaC::ex_to<GiNaC::numeric>(t[1].subs(values));
                 GiNaC::numeric c = GiNaC::ex_to<GiNaC::numeric>(t[2].subs(values));
-                holds = holds && (a + b + c).is_integer() && a >= 0 && b >= 0 && c >= 0 && a <= b + c &&
-                        b <= a + c && c <= a + b;
+                holds = holds && (a + b + c).is_integer() && a >= 0 && b >= 0 && c >= 0 && a <= b + c && b <= a + c &&
+                        c <= a + b;
             }
             if (!holds) continue;
         }

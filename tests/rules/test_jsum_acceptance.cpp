@@ -4,9 +4,9 @@
 // the input at sampled points.
 #include <catch2/catch.hpp>
 
+#include "cli_simplify.hpp"
 #include "rules/engine.hpp"
 #include "simplify/simplify.hpp"
-#include "cli_simplify.hpp"
 #include "support.hpp"
 
 using namespace couplet;
@@ -28,8 +28,7 @@ TEST_CASE("6j orthogonality in disguise gives delta/(2p+1) with the triangles of
 TEST_CASE("Racah sum rule in disguise gives one 6j", "[rules][cli]") {
     // DLMF 34.5.15; phase split over two factors and padded with (-1)^(2(a+b+z)).
     auto s = simplify_and_compare(
-        "", "sum(z : (-1)^(p+z) * (2*z+1) * 6j{b, a, z; d, c, p} * (-1)^(q+2*(a+b+z)) * 6j{z, d, c; q, a, b})",
-        false);
+        "", "sum(z : (-1)^(p+z) * (2*z+1) * 6j{b, a, z; d, c, p} * (-1)^(q+2*(a+b+z)) * 6j{z, d, c; q, a, b})", false);
     require_exact(s);
     INFO(s.text);
     CHECK(count_of(s.text, "sum(") == 0);
@@ -62,7 +61,8 @@ TEST_CASE("three 6j summed as in DLMF 34.6.2 are recognized as one 9j", "[rules]
 TEST_CASE("9j orthogonality with one 9j transposed and renamed indices gives two deltas", "[rules][cli]") {
     // DLMF 34.7.2; the second 9j transposed (no phase), indices u and v.
     auto s = simplify_and_compare(
-        "", "sum(u, v : (2*u+1) * (2*v+1) * 9j{a, b, u; c, d, v; p, q, e} * 9j{a, c, pp; b, d, qq; u, v, e})", true, 60);
+        "", "sum(u, v : (2*u+1) * (2*v+1) * 9j{a, b, u; c, d, v; p, q, e} * 9j{a, c, pp; b, d, qq; u, v, e})", true,
+        60);
     INFO(s.text << "\n" << s.report.first_mismatch);
     CHECK(s.report.mismatches == 0);
     CHECK(s.report.compared >= 50);
@@ -276,8 +276,8 @@ TEST_CASE("chain: a 9j summed over a corner is expanded, then the Racah sum rule
     CHECK(count_of(s.text, "9j") == 0);
     CHECK(count_of(s.text, "6j") == 0);
     CHECK(count_of(s.text, "delta(") == 1);
-    std::string applied = couplet::testing::rules_applied(
-        "sum(z : (-1)^(z+a) * (2*z+1) * (-1)^(b+4*z) * 9j{z, b, a; a, c, e; b, d, f})");
+    std::string applied =
+        couplet::testing::rules_applied("sum(z : (-1)^(z+a) * (2*z+1) * (-1)^(b+4*z) * 9j{z, b, a; a, c, e; b, d, f})");
     INFO(applied);
     CHECK(count_of(applied, "9j expanded as a sum of three 6j") == 1);
     // After the expansion, the repeated a and b make one 6j the signed one-6j sum (Varshalovich

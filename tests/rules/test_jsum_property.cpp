@@ -4,12 +4,12 @@
 
 #include <random>
 
-#include "model/symbols.hpp"
-#include "rules/rule.hpp"
-#include "simplify/simplify.hpp"
 #include "canonical/symmetries.hpp"
 #include "jsum_check.hpp"
+#include "model/symbols.hpp"
 #include "random_jsum.hpp"
+#include "rules/rule.hpp"
+#include "simplify/simplify.hpp"
 #include "support.hpp"
 
 using namespace couplet;

@@ -21,8 +21,9 @@ TEST_CASE("sums over x and over y that together are 6j orthogonality are merged"
     INFO(s.text);
     CHECK(count_of(s.text, "sum(") == 0);
     CHECK(count_of(s.text, "delta(") == 1);
-    std::string applied = testing::rules_applied("sum(x : 6j{a, b, x; c, d, p} * 6j{a, b, x; c, d, q})"
-                                                 " + sum(y : 2*y * 6j{b, a, y; d, c, p} * 6j{a, b, y; c, d, q})");
+    std::string applied = testing::rules_applied(
+        "sum(x : 6j{a, b, x; c, d, p} * 6j{a, b, x; c, d, q})"
+        " + sum(y : 2*y * 6j{b, a, y; d, c, p} * 6j{a, b, y; c, d, q})");
     INFO(applied);
     CHECK(applied.find("sums merged after renaming their indices\n6j orthogonality\n") != std::string::npos);
 }

@@ -7,9 +7,9 @@
 #include <iostream>
 #include <set>
 
+#include "couplet/couplet.hpp"
 #include "print/print.hpp"
 #include "simplify/identity_registry.hpp"
-#include "couplet/couplet.hpp"
 #include "verify/identity_self_test.hpp"
 
 using namespace couplet;

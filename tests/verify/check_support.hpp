@@ -4,9 +4,9 @@
 #include <string>
 
 #include "print/print.hpp"
+#include "support.hpp"
 #include "verify/identity_check.hpp"
 #include "verify/phase_fit.hpp"
-#include "support.hpp"
 
 namespace couplet::testing {
 

@@ -69,37 +69,42 @@ TEST_CASE("an overall sign is the phase -1", "[verify][dlmf]") {
 
 TEST_CASE("a phase flipped inside a sum is found outside it", "[verify][dlmf]") {
     // DLMF 34.5.15 has (-1)^(x+p+q) under the sum; (-1)^(x+p-q) differs by (-1)^(2q).
-    require_phase("sum(x : (-1)^(x+p-q) * (2*x+1) * 6j{a, b, x; c, d, p} * 6j{a, b, x; d, c, q}) == "
-                  "6j{a, d, p; b, c, q}",
-                  "(-1)^(2*q)");
+    require_phase(
+        "sum(x : (-1)^(x+p-q) * (2*x+1) * 6j{a, b, x; c, d, p} * 6j{a, b, x; d, c, q}) == "
+        "6j{a, d, p; b, c, q}",
+        "(-1)^(2*q)");
 }
 
 TEST_CASE("the 9j sum without (-1)^(2j) fails by a phase of the free j's", "[verify][dlmf]") {
     // DLMF 34.6.2; the triad (j11, j33, j) of its first 6j makes 2j have the parity of
     // 2 j11 + 2 j33 (common practice, no source), so the missing (-1)^(2j) is that phase.
-    require_phase("9j{j11, j12, j13; j21, j22, j23; j31, j32, j33} == sum(j : (2*j+1) * "
-                  "6j{j11, j21, j31; j32, j33, j} * 6j{j12, j22, j32; j21, j, j23} * 6j{j13, j23, j33; j, j11, j12})",
-                  "(-1)^(2*j11+2*j33)");
+    require_phase(
+        "9j{j11, j12, j13; j21, j22, j23; j31, j32, j33} == sum(j : (2*j+1) * "
+        "6j{j11, j21, j31; j32, j33, j} * 6j{j12, j22, j32; j21, j, j23} * 6j{j13, j23, j33; j, j11, j12})",
+        "(-1)^(2*j11+2*j33)");
 }
 
 TEST_CASE("a dropped (2j+1) is found as the missing factor", "[verify][dlmf]") {
     // DLMF 34.5.14 has (2 l3 + 1) on the left.
-    require_factor("sum(j3 : (2*j3+1) * 6j{j1, j2, j3; l1, l2, l3} * 6j{j1, j2, j3; l1, l2, k}) == "
-                   "delta(l3, k) * tri(j1, l2, l3) * tri(l1, j2, l3)",
-                   "1/(2*l3+1)");
+    require_factor(
+        "sum(j3 : (2*j3+1) * 6j{j1, j2, j3; l1, l2, l3} * 6j{j1, j2, j3; l1, l2, k}) == "
+        "delta(l3, k) * tri(j1, l2, l3) * tri(l1, j2, l3)",
+        "1/(2*l3+1)");
     // DLMF 34.3.16 has (2 j3 + 1) on the left; j3 = k wherever a side is nonzero, and j3 comes first.
-    require_factor("sum(m1, m2 : 3j(j1, j2, j3; m1, m2, m3) * 3j(j1, j2, k; m1, m2, n)) == "
-                   "delta(j3, k) * delta(m3, n) * tri(j1, j2, j3)",
-                   "1/(2*j3+1)");
+    require_factor(
+        "sum(m1, m2 : 3j(j1, j2, j3; m1, m2, m3) * 3j(j1, j2, k; m1, m2, n)) == "
+        "delta(j3, k) * delta(m3, n) * tri(j1, j2, j3)",
+        "1/(2*j3+1)");
 }
 
 TEST_CASE("a dropped square root and a constant are missing factors", "[verify][dlmf]") {
     // DLMF 34.3.1 has 1/sqrt(2j+1).
     require_factor("3j(j, j, 0; m, -m, 0) == (-1)^(j-m)", "1/sqrt(2*j+1)");
     // DLMF 34.5.14 with a spurious 2 on the right.
-    require_factor("sum(j3 : (2*j3+1) * (2*l3+1) * 6j{j1, j2, j3; l1, l2, l3} * 6j{j1, j2, j3; l1, l2, k}) == "
-                   "2 * delta(l3, k) * tri(j1, l2, l3) * tri(l1, j2, l3)",
-                   "1/2");
+    require_factor(
+        "sum(j3 : (2*j3+1) * (2*l3+1) * 6j{j1, j2, j3; l1, l2, l3} * 6j{j1, j2, j3; l1, l2, k}) == "
+        "2 * delta(l3, k) * tri(j1, l2, l3) * tri(l1, j2, l3)",
+        "1/2");
 }
 
 TEST_CASE("a missing factor together with a missing phase", "[verify][dlmf]") {

@@ -44,11 +44,13 @@ TEST_CASE("3j special case with a zero holds", "[verify][dlmf]") {
 
 TEST_CASE("3j orthogonality holds", "[verify][dlmf]") {
     // DLMF 34.3.16, with the triangle of (j1, j2, j3) that DLMF assumes.
-    require_holds("sum(m1, m2 : (2*j3+1) * 3j(j1, j2, j3; m1, m2, m3) * 3j(j1, j2, k; m1, m2, n)) == "
-                  "delta(j3, k) * delta(m3, n) * tri(j1, j2, j3)");
+    require_holds(
+        "sum(m1, m2 : (2*j3+1) * 3j(j1, j2, j3; m1, m2, m3) * 3j(j1, j2, k; m1, m2, n)) == "
+        "delta(j3, k) * delta(m3, n) * tri(j1, j2, j3)");
     // DLMF 34.3.17
-    require_holds("sum(j3, m3 : (2*j3+1) * 3j(j1, j2, j3; m1, m2, m3) * 3j(j1, j2, j3; n1, n2, m3)) == "
-                  "delta(m1, n1) * delta(m2, n2)");
+    require_holds(
+        "sum(j3, m3 : (2*j3+1) * 3j(j1, j2, j3; m1, m2, m3) * 3j(j1, j2, j3; n1, n2, m3)) == "
+        "delta(m1, n1) * delta(m2, n2)");
 }
 
 TEST_CASE("6j symmetries hold", "[verify][dlmf]") {
@@ -59,26 +61,30 @@ TEST_CASE("6j symmetries hold", "[verify][dlmf]") {
 
 TEST_CASE("6j orthogonality holds", "[verify][dlmf]") {
     // DLMF 34.5.14, with the triangles of l3 that DLMF assumes written as tri().
-    require_holds("sum(j3 : (2*j3+1) * (2*l3+1) * 6j{j1, j2, j3; l1, l2, l3} * 6j{j1, j2, j3; l1, l2, k}) == "
-                  "delta(l3, k) * tri(j1, l2, l3) * tri(l1, j2, l3)");
+    require_holds(
+        "sum(j3 : (2*j3+1) * (2*l3+1) * 6j{j1, j2, j3; l1, l2, l3} * 6j{j1, j2, j3; l1, l2, k}) == "
+        "delta(l3, k) * tri(j1, l2, l3) * tri(l1, j2, l3)");
 }
 
 TEST_CASE("Racah sum rule holds", "[verify][dlmf]") {
     // DLMF 34.5.15 (letters renamed; the arrangement from memory)
-    require_holds("sum(x : (-1)^(x+p+q) * (2*x+1) * 6j{a, b, x; c, d, p} * 6j{a, b, x; d, c, q}) == "
-                  "6j{a, d, p; b, c, q}");
+    require_holds(
+        "sum(x : (-1)^(x+p+q) * (2*x+1) * 6j{a, b, x; c, d, p} * 6j{a, b, x; d, c, q}) == "
+        "6j{a, d, p; b, c, q}");
 }
 
 TEST_CASE("Biedenharn-Elliott identity holds", "[verify][dlmf]") {
     // DLMF 34.5.16 (letters renamed; the arrangement from memory); depth 1 keeps it quick.
-    require_holds("sum(x : (-1)^(a+b+c+d+e+f+p+q+r+x) * (2*x+1) * 6j{a, b, x; c, d, p} * 6j{c, d, x; e, f, q} * "
-                  "6j{e, f, x; b, a, r}) == 6j{p, q, r; e, a, d} * 6j{p, q, r; f, b, c}",
-                  2, 200);
+    require_holds(
+        "sum(x : (-1)^(a+b+c+d+e+f+p+q+r+x) * (2*x+1) * 6j{a, b, x; c, d, p} * 6j{c, d, x; e, f, q} * "
+        "6j{e, f, x; b, a, r}) == 6j{p, q, r; e, a, d} * 6j{p, q, r; f, b, c}",
+        2, 200);
 }
 
 TEST_CASE("9j as a sum over three 6j holds", "[verify][dlmf]") {
     // DLMF 34.6.2
-    require_holds("9j{j11, j12, j13; j21, j22, j23; j31, j32, j33} == sum(j : (-1)^(2*j) * (2*j+1) * "
-                  "6j{j11, j21, j31; j32, j33, j} * 6j{j12, j22, j32; j21, j, j23} * 6j{j13, j23, j33; j, j11, j12})",
-                  2, 200);
+    require_holds(
+        "9j{j11, j12, j13; j21, j22, j23; j31, j32, j33} == sum(j : (-1)^(2*j) * (2*j+1) * "
+        "6j{j11, j21, j31; j32, j33, j} * 6j{j12, j22, j32; j21, j, j23} * 6j{j13, j23, j33; j, j11, j12})",
+        2, 200);
 }

@@ -5,10 +5,10 @@
 #include "eval/evaluate.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
+#include "support.hpp"
 #include "verify/domain.hpp"
 #include "verify/phase_fit.hpp"
 #include "verify/sampler.hpp"
-#include "support.hpp"
 
 using namespace couplet;
 using GiNaC::ex;
@@ -32,7 +32,7 @@ fitted fit_signs_of(const std::string& program_text) {
     std::vector<verify::sign_need> needs;
     for (const auto& t : s.points)
         needs.push_back(sign.at(verify::to_assignment(d, t)).sign() < 0 ? verify::sign_need::flip
-                                                                          : verify::sign_need::keep);
+                                                                        : verify::sign_need::keep);
     fitted out;
     auto e = verify::fit_phase(s.points, needs);
     if (!e) return out;

@@ -5,9 +5,9 @@
 #include <algorithm>
 #include <cstdlib>
 
+#include "support.hpp"
 #include "verify/domain.hpp"
 #include "verify/sampler.hpp"
-#include "support.hpp"
 
 using namespace couplet;
 
@@ -43,7 +43,7 @@ TEST_CASE("sample points respect int and half declarations", "[verify]") {
     auto s = sample("int l\nhalf s\n3j(l, s, j; m1, m2, m3) == 0");
     REQUIRE(!s.samples.points.empty());
     for (const auto& p : s.samples.points) {
-        CHECK(twice(s, p, "l") % 2 == 0);  // an integer l has 2l even (the meaning of 'int')
+        CHECK(twice(s, p, "l") % 2 == 0);             // an integer l has 2l even (the meaning of 'int')
         CHECK(std::labs(twice(s, p, "s")) % 2 == 1);  // a half-odd s has 2s odd (the meaning of 'half')
     }
 }

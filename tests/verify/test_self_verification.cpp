@@ -5,8 +5,8 @@
 #include "api/statement_runner.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
-#include "verify/simplification_check.hpp"
 #include "support.hpp"
+#include "verify/simplification_check.hpp"
 
 using namespace couplet;
 using couplet::testing::run_cli;
@@ -46,7 +46,8 @@ TEST_CASE("simplify JSON reports the verification", "[verify][cli]") {
     CHECK(j.at("verified") == true);
     // The time-matched budget guarantees its minimum whatever the machine's speed.
     CHECK(j.at("points").get<std::size_t>() >= verify::verification_budget{}.min_points);
-    r = run_cli({"simplify", "--no-verify", "--format", "json", "-e", "(-1)^(a+b) * (-1)^(b+c) * 3j(a, b, c; 0, 0, 0)"});
+    r = run_cli(
+        {"simplify", "--no-verify", "--format", "json", "-e", "(-1)^(a+b) * (-1)^(b+c) * 3j(a, b, c; 0, 0, 0)"});
     REQUIRE(r.code == 0);
     j = nlohmann::json::parse(r.out);
     CHECK(j.at("verified") == false);

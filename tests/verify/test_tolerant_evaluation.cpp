@@ -41,8 +41,9 @@ TEST_CASE("an undefined factor beside nonzero ones is still an error", "[verify]
 
 TEST_CASE("a conversion that brings in sqrt(2j-1) for a shifted j verifies", "[verify]") {
     // DLMF 34.1.1 turns <l m1, J mb | (a-1) mb> into a 3j with sqrt(2(a-1)+1).
-    auto p = testing::lower_text("let A = <l m1, J mb | (a-1) mb>\n"
-                                 "let B = (-1)^(l-J+mb) * sqrt(2*a-1) * 3j(l, J, a-1; m1, mb, -mb)");
+    auto p = testing::lower_text(
+        "let A = <l m1, J mb | (a-1) mb>\n"
+        "let B = (-1)^(l-J+mb) * sqrt(2*a-1) * 3j(l, J, a-1; m1, mb, -mb)");
     auto v = verify::verify_simplification(p.statements[0].value, p.statements[1].value, p.numbers, {});
     CHECK(v.agrees);
     CHECK(v.nonzero > 20);
@@ -50,8 +51,9 @@ TEST_CASE("a conversion that brings in sqrt(2j-1) for a shifted j verifies", "[v
 
 TEST_CASE("a free projection named like a sum's index takes its range from its own column", "[verify]") {
     // mb is summed in the 3j and free in the CG, where it is the projection of 0.
-    auto c = testing::check_text("x * <j m, b 1/2 | 0 mb> + sum(mb : 3j(j, l, k; mb, -mb, 0)) == "
-                                 "x * <j m, b 1/2 | 0 mb> + sum(mb : 3j(j, l, k; mb, -mb, 0))");
+    auto c = testing::check_text(
+        "x * <j m, b 1/2 | 0 mb> + sum(mb : 3j(j, l, k; mb, -mb, 0)) == "
+        "x * <j m, b 1/2 | 0 mb> + sum(mb : 3j(j, l, k; mb, -mb, 0))");
     CHECK(c.report.result == verify::verdict::holds);
     CHECK(c.report.points > 20);
 }
