@@ -2,6 +2,8 @@
 // that every triad holds: points where the symbols are nonzero are the ones that test anything.
 #pragma once
 
+#include "exact/admissibility.hpp"
+
 #include <optional>
 #include <random>
 #include <vector>
@@ -71,7 +73,8 @@ public:
 
 private:
     int uniform(int lo, int hi) { return std::uniform_int_distribution<int>(lo, hi)(rng_); }
-    static bool fits(int a, int b, int c) { return c >= std::abs(a - b) && c <= a + b && (a + b + c) % 2 == 0; }
+    // Doubled arguments, as exact::triangle takes them.
+    static bool fits(int a, int b, int c) { return exact::triangle(a, b, c); }
 
     std::mt19937 rng_;
     int max_;

@@ -5,6 +5,8 @@
 // symbols can be nonzero, so that the comparison tests something).
 #pragma once
 
+#include "exact/admissibility.hpp"
+
 #include <ginac/ginac.h>
 
 #include <algorithm>
@@ -91,7 +93,8 @@ private:
         for (std::size_t k = 0; k < e.nops(); ++k) collect(e.op(k), bound);
     }
 
-    static bool fits(int a, int b, int c) { return c >= std::abs(a - b) && c <= a + b && (a + b + c) % 2 == 0; }
+    // Doubled arguments, as exact::triangle takes them.
+    static bool fits(int a, int b, int c) { return exact::triangle(a, b, c); }
 
     bool assign_angular(std::vector<int>& j, std::size_t k) {
         if (k == j.size()) return true;
