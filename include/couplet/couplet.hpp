@@ -67,6 +67,7 @@ struct statement {
     GiNaC::ex rhs;                                           // a check's right side
     std::vector<std::pair<std::string, GiNaC::numeric>> at;  // eval ... at NAME=VALUE
     std::size_t offset = 0, end = 0;                         // where it starts and ends in the input (bytes)
+    std::size_t line = 1, column = 1;                        // where it starts, as messages count
 };
 
 // One identity applied in a simplification, with the term it changed.
@@ -155,10 +156,11 @@ enum class bare_meaning { simplify, eval };
 result run(const program& p, std::size_t k, const options& o = {}, bare_meaning bare = bare_meaning::simplify);
 
 // Carries out every statement in order, handing each result to `each` as soon as it is done;
-// the time limit counts for the whole run.  Throws input_error at the first statement that
-// cannot be carried out, after the results before it were handed over.
+// the time limit counts for the whole run.  A statement that cannot be carried out goes to
+// `failed` and the run goes on with the next; without `failed`, the run stops there and throws
+// it.  The time limit stops the run either way: it throws, naming what was not started.
 void run_all(const program& p, const options& o, const std::function<void(const result&)>& each,
-             bare_meaning bare = bare_meaning::simplify);
+             bare_meaning bare = bare_meaning::simplify, const std::function<void(const input_error&)>& failed = {});
 
 // One statement given as text: the last statement of `text` (earlier ones may declare and define).
 result simplify(const std::string& text, const options& o = {});
@@ -177,7 +179,7 @@ std::string to_text(const result& r);
 // The result as LaTeX (amsmath): the answer, the exact value, or both sides of a check with
 // the verdict's relation (=, \neq, or =? when undecided).
 std::string to_latex(const result& r);
-// The result as one JSON object on one line.
+// The result as one JSON object on one line, with the statement's line in the input.
 std::string to_json(const result& r);
 // An input_error as a JSON object on one line: {"error", "line", "column"}.
 std::string to_json(const input_error& e);

@@ -50,7 +50,8 @@ std::string bounds_text() {
        << " summands in one evaluation;\n"
        << "  nesting of parentheses, calls and powers at most " << max_nesting << " deep; numbers of at most "
        << max_number_digits << " digits;\n"
-       << "  integer powers x^n with |n| <= " << max_integer_exponent << ".\n\n";
+       << "  integer powers x^n with |n| <= " << max_integer_exponent << ", and a power of numbers of at most "
+       << max_computed_digits << " digits.\n\n";
     return os.str();
 }
 

@@ -86,20 +86,18 @@ json simplify_json(const result& r) {
     return j;
 }
 
-}  // namespace
-
-std::string to_json(const result& r) {
+json kind_record(const result& r) {
     switch (r.done) {
         case statement_kind::simplify:
-            return line_of(simplify_json(r));
+            return simplify_json(r);
         case statement_kind::eval:
-            return line_of({{"kind", "eval"},
-                            {"input", r.source.text},
-                            {"result", r.value->exact},
-                            {"exact", r.value->exact},
-                            {"decimal", r.value->decimal},
-                            {"latex", r.value->latex},
-                            {"input_latex", to_latex(r.source.value)}});
+            return json{{"kind", "eval"},
+                        {"input", r.source.text},
+                        {"result", r.value->exact},
+                        {"exact", r.value->exact},
+                        {"decimal", r.value->decimal},
+                        {"latex", r.value->latex},
+                        {"input_latex", to_latex(r.source.value)}};
         case statement_kind::check: {
             json j{{"kind", "check"}, {"input", r.source.text}, {"latex", to_latex(r)}, {"result", to_text(r)}};
             if (r.check) {
@@ -108,14 +106,24 @@ std::string to_json(const result& r) {
                 j["holds"] = nullptr;
                 j["verdict"] = "internal check failed";
             }
-            return line_of(j);
+            return j;
         }
         case statement_kind::definition:
-            return line_of({{"kind", "definition"}, {"input", r.source.text}, {"name", r.source.name}});
+            return json{{"kind", "definition"}, {"input", r.source.text}, {"name", r.source.name}};
         default:
-            return line_of({{"kind", "declaration"}, {"input", r.source.text}});
+            return json{{"kind", "declaration"}, {"input", r.source.text}};
     }
 }
+
+json record_of(const result& r) {
+    json j = kind_record(r);
+    j["line"] = r.source.line;
+    return j;
+}
+
+}  // namespace
+
+std::string to_json(const result& r) { return line_of(record_of(r)); }
 
 std::string to_json(const input_error& e) {
     return line_of({{"error", e.what()}, {"line", e.line()}, {"column", e.column()}});

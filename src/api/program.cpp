@@ -19,7 +19,7 @@ statement_kind public_kind(request_kind k) {
     }
 }
 
-statement public_view(const lowered_statement& s) {
+statement public_view(const source_file& src, const lowered_statement& s) {
     statement out;
     out.kind = public_kind(s.kind);
     out.text = s.text;
@@ -29,6 +29,9 @@ statement public_view(const lowered_statement& s) {
     for (const value_assignment& a : s.at) out.at.emplace_back(a.name.get_name(), a.value);
     out.offset = s.span.begin;
     out.end = s.span.end;
+    const auto at = src.locate(s.span.begin);
+    out.line = at.line;
+    out.column = at.column;
     return out;
 }
 
@@ -46,7 +49,7 @@ program parse(const std::string& text, const std::string& name) {
     } catch (const user_error& e) {
         throw as_input_error(p->source, e);
     }
-    for (const lowered_statement& s : p->lowered.statements) p->statements.push_back(public_view(s));
+    for (const lowered_statement& s : p->lowered.statements) p->statements.push_back(public_view(p->source, s));
     return program(p);
 }
 

@@ -36,11 +36,16 @@ run_limits limits_of(const options& o) {
     return limits;
 }
 
+// The time limit reached at statement k, which is then stopped with `done` statements finished.
+struct stopped_at {
+    std::size_t k, done;
+    bool partial;  // the statement established something before the limit
+};
+
 // Statement k under the limits in force: every way it can be refused becomes a user_error at
-// the statement.  `done` statements came before it in this run.
+// the statement; the time limit becomes stopped_at.
 result run_one(const program::parts& p, std::size_t k, const options& o, bare_meaning bare, std::size_t done) {
     const std::size_t offset = p.lowered.statements.at(k).span.begin;
-    const std::size_t after = p.statements.size() - k - 1;
     try {
         check_deadline();
         return execute_statement(p, k, o, bare);
@@ -50,8 +55,14 @@ result run_one(const program::parts& p, std::size_t k, const options& o, bare_me
         // The phase algebra works in 64-bit integers; coefficients beyond that are refused.
         throw user_error(offset, std::string("refused: numbers too large here: ") + e.what());
     } catch (const time_limit_reached&) {
-        throw user_error(offset, stopped_message(o.time_limit_seconds, done, after, false));
+        throw stopped_at{k, done, false};
     }
+}
+
+input_error stopped_error(const program::parts& p, const options& o, const stopped_at& s) {
+    const std::size_t not_started = p.statements.size() - s.k - 1;
+    return as_input_error(p.source, user_error(p.statements[s.k].offset,
+                                               stopped_message(o.time_limit_seconds, s.done, not_started, s.partial)));
 }
 
 result last_statement(const std::string& text, const options& o, bare_meaning bare) {
@@ -71,25 +82,32 @@ result run(const program& p, std::size_t k, const options& o, bare_meaning bare)
         return run_one(parts, k, o, bare, 0);
     } catch (const user_error& e) {
         throw as_input_error(parts.source, e);
+    } catch (const stopped_at& s) {
+        throw stopped_error(parts, o, s);
     }
 }
-
-void run_all(const program& p, const options& o, const std::function<void(const result&)>& each, bare_meaning bare) {
+void run_all(const program& p, const options& o, const std::function<void(const result&)>& each, bare_meaning bare,
+             const std::function<void(const input_error&)>& failed) {
     const program::parts& parts = p.internals();
     scoped_run_limits in_force(limits_of(o));
+    std::size_t done = 0;  // statements finished
     try {
         for (std::size_t k = 0; k < parts.statements.size(); ++k) {
-            result r = run_one(parts, k, o, bare, k);
-            each(r);
-            if (r.stopped)
-                throw user_error(parts.statements[k].offset,
-                                 stopped_message(o.time_limit_seconds, k, parts.statements.size() - k - 1, true));
+            try {
+                result r = run_one(parts, k, o, bare, done);
+                each(r);
+                if (r.stopped) throw stopped_at{k, done, true};
+                ++done;
+            } catch (const user_error& e) {
+                // A refusal ends its statement only, where the caller takes the errors.
+                if (!failed) throw as_input_error(parts.source, e);
+                failed(as_input_error(parts.source, e));
+            }
         }
-    } catch (const user_error& e) {
-        throw as_input_error(parts.source, e);
+    } catch (const stopped_at& s) {
+        throw stopped_error(parts, o, s);
     }
 }
-
 result simplify(const std::string& text, const options& o) { return last_statement(text, o, bare_meaning::simplify); }
 result eval(const std::string& text, const options& o) { return last_statement(text, o, bare_meaning::eval); }
 result check(const std::string& text, const options& o) {

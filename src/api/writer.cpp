@@ -26,14 +26,16 @@ void writer::begin(const program& p) {
     if (is_latex(state_->format)) state_->latex.begin();
 }
 
+// Each result is flushed as it is written: a later statement that runs long or is killed must
+// not take the finished ones with it.
 void writer::write(const result& r) {
     if (is_latex(state_->format)) {
         state_->latex.statement(state_->input->source, r);
-        return;
+    } else if (r.done != statement_kind::definition && r.done != statement_kind::declaration) {
+        // Declarations and definitions print nothing: they only prepare later statements.
+        state_->out << (state_->format == output_format::json ? to_json(r) : to_text(r)) << "\n";
     }
-    // Declarations and definitions print nothing: they only prepare later statements.
-    if (r.done == statement_kind::definition || r.done == statement_kind::declaration) return;
-    state_->out << (state_->format == output_format::json ? to_json(r) : to_text(r)) << "\n";
+    state_->out.flush();
 }
 
 void writer::end() {
@@ -42,6 +44,7 @@ void writer::end() {
 
 void writer::error(const input_error& e) {
     if (state_->format == output_format::json) state_->out << to_json(e) << "\n";
+    state_->out.flush();
 }
 
 }  // namespace couplet

@@ -4,7 +4,10 @@
 
 #include <CLI/CLI.hpp>
 #include <chrono>
+#include <cmath>
 #include <cstdio>
+#include <cstdlib>
+#include <filesystem>
 #include <fstream>
 #include <iostream>
 #include <optional>
@@ -18,8 +21,11 @@ namespace couplet::cli {
 namespace {
 
 const char* const exit_status_text =
-    R"(Exit status: 0 done (every check holds), 1 a check fails, 2 bad input or a refused request,
-3 an internal check failed (a simplification changed the value; the input is printed as is).)";
+    R"(A statement that cannot be carried out is reported with its line and column, and the others
+still run; an error in the syntax or a name stops the whole input before anything runs.
+Exit status: 0 done (every check holds), 1 a check fails, 2 bad input, a refused request or
+output that could not be written, 3 an internal check failed (a simplification changed the
+value; the input is printed as is); the highest that applies.)";
 
 std::string help_footer() { return couplet::conventions_text() + exit_status_text; }
 
@@ -56,6 +62,13 @@ void add_common_options(CLI::App& sub, request& r) {
         ->check(CLI::Range(std::size_t{1}, std::size_t{1000000000}));
     sub.add_option("--time-limit", r.time_limit,
                    "Stop after SECONDS of wall-clock time; statements finished by then are printed (default: none)")
+        ->check(CLI::Validator(
+            [](const std::string& s) {
+                // Range lets NaN through (every comparison with it is false).
+                const double v = std::strtod(s.c_str(), nullptr);
+                return std::isfinite(v) ? std::string() : std::string("not a number of seconds: " + s);
+            },
+            "FINITE"))
         ->check(CLI::Range(0.001, 1e6));
 }
 
@@ -102,12 +115,19 @@ std::optional<std::pair<std::string, std::string>> read_input(const request& r, 
         return std::nullopt;
     }
     if (r.file == "-") return std::make_pair(std::string("<stdin>"), read_all(in));
+    std::error_code ec;
+    if (std::filesystem::is_directory(r.file, ec)) {
+        err << "couplet: '" << r.file << "' is a directory; give a file of statements\n";
+        return std::nullopt;
+    }
     std::ifstream f(r.file, std::ios::binary);
-    if (!f) {
+    std::string text;
+    if (f) text = read_all(f);
+    if (!f || f.bad()) {
         err << "couplet: cannot read '" << r.file << "'\n";
         return std::nullopt;
     }
-    return std::make_pair(r.file, read_all(f));
+    return std::make_pair(r.file, text);
 }
 
 output_format format_of(const request& r) {
@@ -130,6 +150,12 @@ options options_of(const request& r, bool explicit_sampling) {
     return o;
 }
 
+// Results that could not be written are an error, not a success with nothing to show.
+int output_lost(std::ostream& err) {
+    err << "couplet: the output could not be written (standard output closed, or the disk full)\n";
+    return bad_input;
+}
+
 // Every statement in order, each result written as soon as it is done; the exit code.
 int run_input(const request& r, const std::string& name, const std::string& text, options o, std::ostream& out,
               std::ostream& err) {
@@ -142,7 +168,7 @@ int run_input(const request& r, const std::string& name, const std::string& text
             meter.emplace(err);
             o.progress = meter->callback();
         }
-        bool any_failed = false, any_internal = false;
+        bool any_failed = false, any_internal = false, any_error = false;
         output.begin(input);
         auto each = [&](const result& res) {
             output.write(res);
@@ -150,12 +176,20 @@ int run_input(const request& r, const std::string& name, const std::string& text
             any_failed = any_failed || res.failed();
             any_internal = any_internal || res.internal_failure;
         };
-        run_all(input, o, each, r.command == "eval" ? bare_meaning::eval : bare_meaning::simplify);
+        // A statement that cannot be carried out is reported where it stands; the others run.
+        auto failed = [&](const input_error& e) {
+            err << e.diagnostic();
+            output.error(e);
+            any_error = true;
+        };
+        run_all(input, o, each, r.command == "eval" ? bare_meaning::eval : bare_meaning::simplify, failed);
         output.end();
-        return any_internal ? internal_failure : any_failed ? check_false : ok;
+        if (!out) return output_lost(err);
+        return any_internal ? internal_failure : any_error ? bad_input : any_failed ? check_false : ok;
     } catch (const input_error& e) {
         err << e.diagnostic();
         output.error(e);
+        if (!out) return output_lost(err);
         return bad_input;
     }
 }

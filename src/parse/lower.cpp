@@ -2,6 +2,7 @@
 
 #include <boost/variant/apply_visitor.hpp>
 #include <cctype>
+#include <functional>
 #include <map>
 #include <set>
 #include <sstream>
@@ -77,9 +78,17 @@ private:
                                                 "' is already used as a quantum "
                                                 "number (first at " +
                                                 where(q->first_offset) + ")");
-        later_definitions_.erase(d.name.name);
         s.name = d.name.name;
+        defining_ = d.name.name;
         s.value = expression(d.value);
+        defining_.clear();
+        // The parser bounds the nesting of one statement; a chain of lets, each built on the
+        // last, is bounded here, before the stages' recursion would overflow the stack.
+        if (nesting_depth(s.value, max_definition_depth + 1) > max_definition_depth)
+            throw user_error(d.name.offset, "'" + d.name.name + "' is nested more than " +
+                                                std::to_string(max_definition_depth) +
+                                                " levels deep through the lets it uses");
+        later_definitions_.erase(d.name.name);
         definitions_.emplace(d.name.name, s.value);
     }
 
@@ -194,7 +203,43 @@ private:
         if (base.is_zero() && !n.is_pos_integer()) throw user_error(exponent_offset, "division by zero");
         if (is_a<numeric>(base) && ex_to<numeric>(base).is_negative() && !n.is_integer())
             throw user_error(exponent_offset, "a fractional power of a negative number is not real");
+        // Estimated before it is built: chained powers such as ((3^1000)^1000)^1000 would
+        // otherwise take memory and time without bound.
+        if (is_a<numeric>(base)) {
+            const double digits = static_cast<double>(digits_of(ex_to<numeric>(base))) * abs(n).to_double();
+            if (digits > max_computed_digits)
+                throw user_error(exponent_offset, "this power would be a number of about " +
+                                                      std::to_string(static_cast<long long>(digits)) +
+                                                      " digits (at most " + std::to_string(max_computed_digits) + ")");
+        }
         return pow(base, exponent);
+    }
+
+    // The depth of e's tree, each shared subexpression measured once, and no deeper than
+    // `limit` (a deeper tree reports limit).
+    static std::size_t nesting_depth(const ex& e, std::size_t limit) {
+        std::map<const basic*, std::size_t> measured;
+        std::function<std::size_t(const ex&, std::size_t)> depth = [&](const ex& x, std::size_t level) {
+            if (x.nops() == 0 || level >= limit) return level;
+            const basic* key = &ex_to<basic>(x);
+            if (auto it = measured.find(key); it != measured.end()) return level + it->second;
+            std::size_t deepest = level;
+            for (std::size_t i = 0; i < x.nops() && deepest < limit; ++i)
+                deepest = std::max(deepest, depth(x.op(i), level + 1));
+            if (deepest < limit) measured[key] = deepest - level;
+            return deepest;
+        };
+        return depth(e, 0);
+    }
+
+    // Decimal digits of the larger of numerator and denominator.
+    static std::size_t digits_of(const numeric& q) {
+        auto length = [](const numeric& z) {
+            std::ostringstream os;
+            os << abs(z);
+            return os.str().size();
+        };
+        return std::max(length(q.numer()), length(q.denom()));
     }
 
     ex operand(const ast::operand& o) {
@@ -212,6 +257,9 @@ private:
     }
 
     ex node(const ast::identifier& id) {
+        if (id.name == defining_)
+            throw user_error(id.offset,
+                             "'" + id.name + "' is used in its own definition; a let cannot refer to itself");
         if (auto it = definitions_.find(id.name); it != definitions_.end()) return it->second;
         if (auto it = later_definitions_.find(id.name); it != later_definitions_.end())
             throw user_error(id.offset, "'" + id.name + "' is used before its definition at " + where(it->second));
@@ -348,6 +396,7 @@ private:
     lowered_program& out_;
     std::map<std::string, ex> definitions_;
     std::map<std::string, std::size_t> later_definitions_;
+    std::string defining_;  // the name of the let being lowered
 };
 
 }  // namespace

@@ -14,7 +14,9 @@ namespace couplet {
 
 // Bounds on what lowering accepts, so that no literal can exhaust memory.
 constexpr std::size_t max_number_digits = 200;
-constexpr long max_integer_exponent = 1000;  // |n| in x^n
+constexpr long max_integer_exponent = 1000;         // |n| in x^n
+constexpr long max_computed_digits = 10000;         // a number that a power of numbers makes
+constexpr std::size_t max_definition_depth = 1000;  // nesting of a let's value through other lets
 
 enum class request_kind { declaration, definition, simplify, check, eval };
 
