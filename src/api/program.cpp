@@ -43,7 +43,10 @@ input_error as_input_error(const source_file& src, const user_error& e) {
 }
 
 program parse(const std::string& text, const std::string& name) {
-    auto p = std::make_shared<program::parts>(program::parts{source_file(name, text), {}, {}});
+    // A byte-order mark that an editor put before the first line is not part of the input.
+    const bool marked = text.compare(0, 3, "\xEF\xBB\xBF") == 0;
+    auto p =
+        std::make_shared<program::parts>(program::parts{source_file(name, marked ? text.substr(3) : text), {}, {}});
     try {
         p->lowered = read_program(p->source);
     } catch (const user_error& e) {

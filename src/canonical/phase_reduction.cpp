@@ -188,11 +188,16 @@ private:
     ex reduce(const ex& exponent, const phase::context& ctx) {
         phase::linear_form x = linear_form_of(exponent);
         phase::integrality i = ctx.check_integer(x);
-        if (!i.integer)
+        if (!i.integer && is_a<numeric>(exponent))
+            throw phase_not_integer("the exponent of (-1)^(" + to_text(exponent) +
+                                    ") is not an integer, so the phase is not real; fix the phase");
+        if (!i.integer) {
+            const std::string example = i.witness ? show(*i.witness) : std::string();
             throw phase_not_integer("the exponent of (-1)^(" + to_text(exponent) +
                                     ") is not an integer for every admissible value" +
-                                    (i.witness ? " (for example at " + show(*i.witness) + ")" : std::string()) +
+                                    (example.empty() ? std::string() : " (for example at " + example + ")") +
                                     "; declare the parities with 'int' or 'half', or fix the phase");
+        }
         if (!rewrite_) return make_phase(exponent);
         return make_phase(to_ex(ctx.canonical(x), numbers_, own_symbols_));
     }

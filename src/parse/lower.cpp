@@ -80,8 +80,10 @@ private:
                                                 where(q->first_offset) + ")");
         s.name = d.name.name;
         defining_ = d.name.name;
+        written_.clear();
         s.value = expression(d.value);
         defining_.clear();
+        names_written_in_[d.name.name] = written_;
         // The parser bounds the nesting of one statement; a chain of lets, each built on the
         // last, is bounded here, before the stages' recursion would overflow the stack.
         if (nesting_depth(s.value, max_definition_depth + 1) > max_definition_depth)
@@ -107,11 +109,13 @@ private:
 
     void fill(lowered_statement& s, const ast::eval_request& r) {
         s.kind = request_kind::eval;
+        written_.clear();
         s.value = expression(r.value);
         auto present = symbols_in(s.value);
         for (const ast::assignment& a : r.at) {
             const quantum_number* q = out_.numbers.find(a.name.name);
-            if (!q || !present.count(q->symbol))
+            // A name the expression was written with counts even where it cancelled (0*x).
+            if (!q || (!present.count(q->symbol) && !written_.count(a.name.name)))
                 throw user_error(a.name.offset, "'" + a.name.name + "' does not occur in the expression to evaluate");
             // A copy: lowering the value can add names to the table and move its entries.
             const symbol assigned = q->symbol;
@@ -260,7 +264,12 @@ private:
         if (id.name == defining_)
             throw user_error(id.offset,
                              "'" + id.name + "' is used in its own definition; a let cannot refer to itself");
-        if (auto it = definitions_.find(id.name); it != definitions_.end()) return it->second;
+        if (auto it = definitions_.find(id.name); it != definitions_.end()) {
+            const auto& inside = names_written_in_[id.name];
+            written_.insert(inside.begin(), inside.end());
+            return it->second;
+        }
+        written_.insert(id.name);
         if (auto it = later_definitions_.find(id.name); it != later_definitions_.end())
             throw user_error(id.offset, "'" + id.name + "' is used before its definition at " + where(it->second));
         return out_.numbers.symbol_for(id.name, id.offset);
@@ -397,6 +406,10 @@ private:
     std::map<std::string, ex> definitions_;
     std::map<std::string, std::size_t> later_definitions_;
     std::string defining_;  // the name of the let being lowered
+    // The names written in the expression being lowered (through the lets it uses), and in
+    // each let's definition.
+    std::set<std::string> written_;
+    std::map<std::string, std::set<std::string>> names_written_in_;
 };
 
 }  // namespace

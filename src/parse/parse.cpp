@@ -1,4 +1,6 @@
 #include <boost/spirit/home/x3.hpp>
+#include <cctype>
+#include <cstdio>
 #include <string>
 
 #include "parse/grammar.hpp"
@@ -11,8 +13,18 @@ namespace x3 = boost::spirit::x3;
 using parser::iterator_type;
 
 // What stands at `at`, for "found ..." in messages: one UTF-8 character, or the end.
+// A control byte is named, not echoed; a decimal point after a digit says what to write instead.
 std::string describe_found(const std::string& text, std::size_t at, std::size_t end) {
     if (at >= end) return "the end of the statement";
+    const unsigned char c = static_cast<unsigned char>(text[at]);
+    if (c < 0x20 || c == 0x7F) {
+        char code[8];
+        std::snprintf(code, sizeof code, "0x%02X", c);
+        return std::string("a control character (byte ") + code + ")";
+    }
+    if (text.compare(at, 3, "\xEF\xBB\xBF") == 0) return "a byte-order mark";
+    if (c == '.' && at > 0 && std::isdigit(static_cast<unsigned char>(text[at - 1])))
+        return "'.' (decimals are not numbers here: write 3/2 for 1.5)";
     std::size_t n = 1;
     while (at + n < end && (static_cast<unsigned char>(text[at + n]) & 0xC0) == 0x80) ++n;
     return "'" + text.substr(at, n) + "'";

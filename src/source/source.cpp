@@ -39,8 +39,13 @@ std::string format_diagnostic(const source_file& src, const user_error& err) {
         start = col > window / 2 ? col - window / 2 : 0;
         line = line.substr(start, window);
     }
-    for (char& c : line)
-        if (c == '\t') c = ' ';
+    // Control bytes are not echoed (a NUL would cut the message): one '?' keeps the caret's column.
+    for (char& c : line) {
+        if (c == '\t')
+            c = ' ';
+        else if ((static_cast<unsigned char>(c) < 0x20) || c == 0x7F)
+            c = '?';
+    }
     std::string out = src.name() + ":" + std::to_string(pos.line) + ":" + std::to_string(pos.column) +
                       ": error: " + err.what() + "\n  " + line + "\n  " + std::string(col - start, ' ') + "^\n";
     return out;

@@ -127,3 +127,37 @@ TEST_CASE("a chain of lets deeper than the bound is refused, not a stack overflo
     std::string shorter = "let W0 = 6j{a, b, c; d, e, f}\nlet W1 = (W0+1)*y\nlet W2 = (W1+1)*y\nW2\n";
     CHECK(run_cli({"simplify", "--no-verify", "-e", shorter}).code == 0);
 }
+
+TEST_CASE("a name that cancels still takes a value in eval ... at", "[cli]") {
+    // 0*x is 0 and (2j+1)/(2j+1) is 1 (common practice, no source); the names were written.
+    CHECK(run_cli({"eval", "-e", "eval 0*x at x=1"}).out == "0  ~ 0\n");
+    CHECK(run_cli({"eval", "-e", "eval (2*j+1)/(2*j+1) at j=1"}).code == 0);
+    CHECK(run_cli({"eval", "-e", "let W = 0*x\neval W at x=1"}).code == 0);
+    // A name that was never written is still a mistake worth a message.
+    auto r = run_cli({"eval", "-e", "eval 6j{1, 1, 1; 1, 1, 1} at q=1"});
+    CHECK(r.code == 2);
+    CHECK(r.err.find("'q' does not occur") != std::string::npos);
+}
+
+TEST_CASE("messages say what was found and what to write instead", "[cli]") {
+    // A constant phase that is not real has no example point and no parity to declare.
+    auto phase = run_cli({"simplify", "-e", "(-1)^(1/2)"});
+    CHECK(phase.code == 2);
+    CHECK(phase.err.find("for example at )") == std::string::npos);
+    CHECK(phase.err.find("not an integer, so the phase is not real") != std::string::npos);
+    // A decimal number.
+    auto decimal = run_cli({"eval", "-e", "6j{1.5, 1, 1; 1, 1, 1}"});
+    CHECK(decimal.code == 2);
+    CHECK(decimal.err.find("write 3/2 for 1.5") != std::string::npos);
+    // A NUL byte is named, and never echoed raw (it would cut the message).
+    auto nul = run_cli({"eval", "-e", std::string("eval 1\0 + 2", 11)});
+    CHECK(nul.code == 2);
+    CHECK(nul.err.find("a control character (byte 0x00)") != std::string::npos);
+    CHECK(nul.err.find('\0') == std::string::npos);
+    // A byte-order mark before the first line is not part of the input.
+    auto marked = run_cli({"eval", "-"},
+                          "\xEF\xBB\xBF"
+                          "eval 1/2");
+    CHECK(marked.code == 0);
+    CHECK(marked.out.substr(0, 3) == "1/2");
+}
