@@ -12,6 +12,7 @@
 #include "exact/admissibility.hpp"
 #include "exact/argument_limits.hpp"
 #include "exact/factored_term.hpp"
+#include "exact/interrupt.hpp"
 #include "exact/racah_series.hpp"
 #include "exact/wigner.hpp"
 
@@ -65,6 +66,7 @@ number ninej(long ta, long tb, long tc, long td, long te, long tf, long tg, long
                            std::array{ta, td, tg}, std::array{tb, te, th}, std::array{tc, tf, ti}})
         largest = std::max(largest, (p + q + r) / 2 + 1);
     for (long x = x_min; x <= x_max; x += 2) {
+        poll_interrupt();
         for (const auto& one : nine.series(x)) largest = std::max(largest, one.largest_factorial_argument());
         largest = std::max({largest, (ta + ti + x) / 2 + 1, (tf + tb + x) / 2 + 1, (td + x + th) / 2 + 1});
     }
@@ -85,6 +87,7 @@ number ninej(long ta, long tb, long tc, long td, long te, long tf, long tg, long
     cln::cl_I total = 0;
     detail::natural product, factor;
     for (long x = x_min; x <= x_max; x += 2) {
+        poll_interrupt();
         const auto s = nine.series(x);
         bool negative = (x & 1) != 0;  // (-1)^(2x)
         product.assign(1);

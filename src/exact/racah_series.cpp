@@ -1,5 +1,7 @@
 #include "exact/racah_series.hpp"
 
+#include "exact/interrupt.hpp"
+
 #include <algorithm>
 
 namespace couplet::exact::detail {
@@ -103,6 +105,7 @@ void racah_series::sum(natural& magnitude, bool& negative) const {
         thread_local natural big_q, t;
         assign_wide(big_q, q);
         for (; l >= 0; --l) {
+            if ((l & 31) == 0) poll_interrupt();  // big-integer steps: a series of 10^4 takes seconds
             const step_factors f = factors_at(*this, first + l);
             t = magnitude;
             multiply_factors(t, f.numerator, f.numerator_count);

@@ -46,13 +46,16 @@ std::size_t expanded_term_count(const ex& e) {
     return 1;
 }
 
-// A sum's body is expanded on its own (the sum stays one term outside), so each body counts
-// against the limit separately.
+// A sum's body is expanded on its own (the sum stays one term outside), and so is the base of a
+// root or any other non-integer power (sqrt((a+b)^10) is expanded inside): each counts against
+// the limit separately.
 void check_expansion(const ex& e) {
     std::size_t limit = current_run_limits().max_terms;
     std::size_t n = expanded_term_count(e);
-    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end() && n <= limit; ++it)
+    for (const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end() && n <= limit; ++it) {
         if (is_a<index_sum>(*it)) n = std::max(n, expanded_term_count(ex_to<index_sum>(*it).body()));
+        if (is_a<power>(*it)) n = std::max(n, expanded_term_count(it->op(0)));
+    }
     if (n > limit)
         throw term_limit_reached("expanding this expression would produce " +
                                  (n == saturated ? std::string("more than 10^19") : std::to_string(n)) +

@@ -1,5 +1,7 @@
 #include "limits/run_limits.hpp"
 
+#include "exact/interrupt.hpp"
+
 namespace couplet {
 
 namespace {
@@ -9,11 +11,15 @@ thread_local run_limits limits_in_force;
 
 const run_limits& current_run_limits() { return limits_in_force; }
 
-scoped_run_limits::scoped_run_limits(const run_limits& limits) : previous_(limits_in_force) {
+scoped_run_limits::scoped_run_limits(const run_limits& limits)
+    : previous_(limits_in_force), previous_check_(exact::set_interrupt_check(&check_deadline)) {
     limits_in_force = limits;
 }
 
-scoped_run_limits::~scoped_run_limits() { limits_in_force = previous_; }
+scoped_run_limits::~scoped_run_limits() {
+    limits_in_force = previous_;
+    exact::set_interrupt_check(previous_check_);
+}
 
 void check_deadline() {
     const auto& deadline = limits_in_force.deadline;

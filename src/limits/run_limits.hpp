@@ -47,6 +47,7 @@ public:
 
 private:
     run_limits previous_;
+    void (*previous_check_)();  // the exact evaluator's interrupt check before these limits
 };
 
 // Throws time_limit_reached once the deadline has passed.  Cheap enough for inner loops

@@ -1,4 +1,5 @@
 // Text notation: the couplet input language itself, so that output can be read back.
+#include <map>
 #include <sstream>
 
 #include "model/symbols.hpp"
@@ -91,9 +92,27 @@ private:
 }  // namespace
 }  // namespace print_detail
 
+// The writer sorts terms and factors by their printed text, and each such key prints a subtree
+// again: without a memo, printing costs grow exponentially with the nesting depth (eight
+// levels of ((x+1)*y+1)*y took seconds).  One memo lives for the outermost call.
 std::string to_text(const GiNaC::ex& e) {
+    using memo = std::map<GiNaC::ex, std::string, GiNaC::ex_is_less>;
+    thread_local memo* printed = nullptr;
+    if (printed)
+        if (auto it = printed->find(e); it != printed->end()) return it->second;
+    memo own;
+    struct scope {
+        memo*& slot;
+        bool outermost;
+        ~scope() {
+            if (outermost) slot = nullptr;
+        }
+    } guard{printed, printed == nullptr};
+    if (guard.outermost) printed = &own;
     print_detail::text_writer w;
-    return w.write(e).text;
+    std::string text = w.write(e).text;
+    printed->emplace(e, text);
+    return text;
 }
 
 }  // namespace couplet

@@ -111,8 +111,10 @@ public:
     sampling_domain finish() const {
         sampling_domain d;
         order_numbers(d);
-        for (const pending& p : pending_) add_rule(d, p);
-        add_variable_rules(d);
+        std::map<std::string, std::size_t> index;
+        for (std::size_t k = 0; k < d.numbers.size(); ++k) index[d.numbers[k].symbol.get_name()] = k;
+        for (const pending& p : pending_) add_rule(d, p, index);
+        add_variable_rules(d, index);
         drop_repeats(d.hard);
         drop_repeats(d.selection);
         return d;
@@ -199,20 +201,26 @@ private:
     }
 
     // form -> L * form with integer coefficients on the doubled values, and L.
-    static std::optional<std::pair<doubled_form, long>> doubled(const sampling_domain& d, const ex& form) {
-        ex x = form.expand();
-        exmap zero;
+    // Read term by term, each name looked up in `index` (the domain's numbers by name): a
+    // product of 500 symbols has thousands of rules over thousands of numbers.
+    static std::optional<std::pair<doubled_form, long>> doubled(const ex& form,
+                                                                const std::map<std::string, std::size_t>& index) {
+        const ex x = form.expand();
         std::vector<std::pair<std::size_t, cln::cl_RA>> halves;  // coefficient on t = 2x
-        for (std::size_t k = 0; k < d.numbers.size(); ++k) {
-            const symbol& s = d.numbers[k].symbol;
-            zero[s] = 0;
-            ex c = x.coeff(s, 1);
-            if (!is_a<numeric>(c)) return std::nullopt;
-            if (!c.is_zero()) halves.emplace_back(k, rational_of(c) / 2);
+        cln::cl_RA constant = 0;
+        for (const ex& t : is_a<add>(x) ? std::vector<ex>(x.begin(), x.end()) : std::vector<ex>{x}) {
+            if (is_a<numeric>(t)) {
+                if (!ex_to<numeric>(t).is_rational()) return std::nullopt;
+                constant = constant + rational_of(t);
+                continue;
+            }
+            ex name = t, coefficient = 1;
+            if (is_a<mul>(t) && t.nops() == 2 && is_a<numeric>(t.op(1))) name = t.op(0), coefficient = t.op(1);
+            if (!is_a<symbol>(name) || !ex_to<numeric>(coefficient).is_rational()) return std::nullopt;
+            auto k = index.find(ex_to<symbol>(name).get_name());
+            if (k == index.end()) return std::nullopt;  // a name the domain does not sample
+            halves.emplace_back(k->second, rational_of(coefficient) / 2);
         }
-        ex rest = x.subs(zero);
-        if (!is_a<numeric>(rest) || !ex_to<numeric>(rest).is_rational()) return std::nullopt;
-        cln::cl_RA constant = rational_of(rest);
         cln::cl_I scale = cln::denominator(constant);
         for (const auto& h : halves) scale = cln::lcm(scale, cln::denominator(h.second));
         doubled_form f;
@@ -235,8 +243,8 @@ private:
         rules = kept;
     }
 
-    static void add_rule(sampling_domain& d, const pending& p) {
-        auto converted = doubled(d, p.form);
+    static void add_rule(sampling_domain& d, const pending& p, const std::map<std::string, std::size_t>& index) {
+        auto converted = doubled(p.form, index);
         if (!converted || converted->first.terms.empty()) return;  // a closed condition constrains no point
         auto [form, scale] = *converted;
         rule r;
@@ -257,7 +265,7 @@ private:
         (p.hard ? d.hard : d.selection).push_back(r);
     }
 
-    void add_variable_rules(sampling_domain& d) const {
+    void add_variable_rules(sampling_domain& d, const std::map<std::string, std::size_t>& index) const {
         for (std::size_t k = 0; k < d.numbers.size(); ++k) {
             free_number& f = d.numbers[k];
             if (f.parity != qn_parity::any) {
@@ -268,12 +276,12 @@ private:
                 r.form.constant = f.parity == qn_parity::half_odd ? 1 : 0;
                 d.hard.push_back(r);
             }
-            if (f.role == qn_role::projection) add_owner_rules(d, k);
+            if (f.role == qn_role::projection) add_owner_rules(d, k, index);
         }
     }
 
     // j - m integral and |m| <= j + shift for a projection m of j.
-    void add_owner_rules(sampling_domain& d, std::size_t k) const {
+    void add_owner_rules(sampling_domain& d, std::size_t k, const std::map<std::string, std::size_t>& index) const {
         free_number& f = d.numbers[k];
         auto reach = reach_.find(f.symbol.get_name());
         if (reach == reach_.end() || !reach->second.owner) return;
@@ -283,9 +291,9 @@ private:
         cln::cl_RA shift = reach->second.plain ? cln::cl_RA(0) : *reach->second.smallest_shift;
         const ex m = f.symbol;
         const numeric s{cln::cl_N(shift)};
-        add_rule(d, {condition::integral, owner - m, true});
-        add_rule(d, {condition::nonnegative, owner + s - m, true});
-        add_rule(d, {condition::nonnegative, owner + s + m, true});
+        add_rule(d, {condition::integral, owner - m, true}, index);
+        add_rule(d, {condition::nonnegative, owner + s - m, true}, index);
+        add_rule(d, {condition::nonnegative, owner + s + m, true}, index);
         f.owned = true;
         f.slack = cln::cl_I_to_long(cln::the<cln::cl_I>(cln::ceiling1(2 * shift)));
     }

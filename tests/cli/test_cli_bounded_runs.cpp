@@ -1,0 +1,63 @@
+// Runs that grew without bound on small inputs (regressions of #18).  Each test gives the run a
+// time limit far above what it needs now, so it fails only if the old growth comes back; the
+// expected outcomes are common practice, no source.
+#include <catch2/catch.hpp>
+
+#include <string>
+
+#include "support.hpp"
+
+using couplet::testing::run_cli;
+
+namespace {
+
+// ((((x+1)*y+1)*y+1)...)*y with `levels` levels.
+std::string nested(int levels) {
+    std::string e = "x";
+    for (int k = 0; k < levels; ++k) e = "(" + e + "+1)*y";
+    return e;
+}
+
+std::string product_of_threej(int n) {
+    std::string e;
+    for (int i = 0; i < n; ++i) {
+        std::string k = std::to_string(i);
+        e += (i ? "*" : "") + std::string("3j(a") + k + ", b" + k + ", c" + k + "; m" + k + ", n" + k + ", -m" + k +
+             "-n" + k + ")";
+    }
+    return e;
+}
+
+}  // namespace
+
+TEST_CASE("printing a deeply nested expression takes time in proportion to its size", "[cli]") {
+    // The printer sorts by printed keys; without a memo each level printed its subtree again.
+    auto r = run_cli({"simplify", "--no-verify", "--time-limit", "30", "-e", nested(12)});
+    REQUIRE(r.code == 0);
+    CHECK(r.out.find("(x+1)*y + 1") != std::string::npos);
+    auto tex = run_cli({"latex", "--fragment", "--time-limit", "30", "-e", nested(12)});
+    CHECK(tex.code == 0);
+    auto value = run_cli({"eval", "--time-limit", "30", "-e", nested(12) + " at x=1, y=1"});
+    CHECK(value.code == 0);
+    CHECK(value.out.substr(0, 3) == "13 ");  // 2, 3, ..., 13 at x = y = 1
+}
+
+TEST_CASE("the time limit stops the exact evaluation of a 9j with large entries", "[cli]") {
+    // The x-sum of a 9j with all entries 5000 runs for minutes; the limit ends it within a second.
+    auto r = run_cli({"eval", "--time-limit", "1", "-e", "9j{5000, 5000, 5000; 5000, 5000, 5000; 5000, 5000, 5000}"});
+    CHECK(r.code == 2);
+    CHECK(r.err.find("stopped: the time limit of 1 s") != std::string::npos);
+}
+
+TEST_CASE("--max-terms looks inside a root", "[cli]") {
+    auto r = run_cli({"simplify", "-e", "sqrt((a+b+c+d+e+f+g+h)^10)"});
+    CHECK(r.code == 2);
+    CHECK(r.err.find("more than the limit of 100000") != std::string::npos);
+}
+
+TEST_CASE("self-verification of a product of many independent 3j is not quadratic", "[cli][timing]") {
+    // 300 independent 3j: the sampling domain read each of its rules against every number
+    // (about 6.6 s in Release before, about 1 s after); the limit leaves a wide margin.
+    auto r = run_cli({"simplify", "--time-limit", "5", "-e", product_of_threej(300)});
+    CHECK(r.code == 0);
+}
