@@ -142,7 +142,9 @@ private:
             throw user_error(a.offset, shown + " is not admissible: '" + q.name + "' is declared 'int'");
         if (q.parity == qn_parity::half_odd && integral)
             throw user_error(a.offset, shown + " is not admissible: '" + q.name + "' is declared 'half'");
-        if (q.role != qn_role::projection && a.value.is_negative())
+        // Only a name that fills a j slot is an angular momentum; one seen only in deltas or as a
+        // plain variable (a projection that survived only in delta(m3, m4)) may be negative.
+        if (q.role == qn_role::angular && a.value.is_negative())
             throw user_error(a.offset, shown + " is not admissible: an angular momentum is never negative");
         if (q.role == qn_role::projection && q.owner) {
             exmap values;

@@ -49,7 +49,7 @@ TEST_CASE("the time limit stops the exact evaluation of a 9j with large entries"
     CHECK(r.err.find("stopped: the time limit of 1 s") != std::string::npos);
 }
 
-TEST_CASE("--max-terms looks inside a root", "[cli]") {
+TEST_CASE("the term bound (--max-terms) looks inside a root", "[cli]") {
     auto r = run_cli({"simplify", "-e", "sqrt((a+b+c+d+e+f+g+h)^10)"});
     CHECK(r.code == 2);
     CHECK(r.err.find("more than the limit of 100000") != std::string::npos);

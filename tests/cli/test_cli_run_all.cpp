@@ -161,3 +161,13 @@ TEST_CASE("messages say what was found and what to write instead", "[cli]") {
     CHECK(marked.code == 0);
     CHECK(marked.out.substr(0, 3) == "1/2");
 }
+
+TEST_CASE("a printed result with a projection only in a delta reads back in", "[cli]") {
+    // simplify prints CG orthogonality as delta(c, d)*delta(m3, m4)*tri(a, b, c) (DLMF 34.1.1
+    // with 34.3.16); m3 and m4 survive only in the delta and may be negative.
+    auto r = run_cli({"eval", "-e", "delta(c, d)*delta(m3, m4)*tri(a, b, c) at a=1, b=1, c=1, d=1, m3=-1, m4=-1"});
+    CHECK(r.code == 0);
+    CHECK(r.out.substr(0, 2) == "1 ");
+    // A name in a j slot is still never negative.
+    CHECK(run_cli({"eval", "-e", "6j{a, 1, 1; 1, 1, 1} at a=-1"}).code == 2);
+}
