@@ -1,6 +1,7 @@
 #include "parse/lower.hpp"
 
 #include <boost/variant/apply_visitor.hpp>
+#include <algorithm>
 #include <cctype>
 #include <functional>
 #include <map>
@@ -9,6 +10,7 @@
 
 #include "model/rewrite.hpp"
 #include "model/symbols.hpp"
+#include "print/print.hpp"
 
 namespace couplet {
 
@@ -416,11 +418,32 @@ private:
 
 }  // namespace
 
+namespace {
+
+// Two names that LaTeX would print alike (j_1 and j1, x_ and x) would make a derivation or a
+// counterexample unreadable ("x = x"); the second one is refused where it first appears.
+void refuse_look_alikes(const quantum_numbers& numbers) {
+    std::map<std::string, const quantum_number*> printed;
+    std::vector<const quantum_number*> in_order;
+    for (const quantum_number& q : numbers.all()) in_order.push_back(&q);
+    std::sort(in_order.begin(), in_order.end(),
+              [](const quantum_number* a, const quantum_number* b) { return a->first_offset < b->first_offset; });
+    for (const quantum_number* q : in_order) {
+        auto [it, fresh] = printed.emplace(latex_identifier(q->name), q);
+        if (!fresh)
+            throw user_error(q->first_offset, "'" + q->name + "' and '" + it->second->name +
+                                                  "' print alike in LaTeX (" + it->first + "); rename one of them");
+    }
+}
+
+}  // namespace
+
 lowered_program lower_program(const source_file& src, const std::vector<parsed_statement>& parsed) {
     lowered_program out;
     lowering l(src, out);
     l.collect_definitions(parsed);
     for (const parsed_statement& p : parsed) out.statements.push_back(l.statement(p));
+    refuse_look_alikes(out.numbers);
     return out;
 }
 

@@ -171,3 +171,12 @@ TEST_CASE("a printed result with a projection only in a delta reads back in", "[
     // A name in a j slot is still never negative.
     CHECK(run_cli({"eval", "-e", "6j{a, 1, 1; 1, 1, 1} at a=-1"}).code == 2);
 }
+
+TEST_CASE("names that LaTeX would print alike are refused", "[cli]") {
+    // x_ and x, j_1 and j1 both print as one symbol: a failing check would read "x = x".
+    auto r = run_cli({"check", "-e", "x_ == x"});
+    CHECK(r.code == 2);
+    CHECK(r.err.find("print alike in LaTeX") != std::string::npos);
+    CHECK(run_cli({"eval", "-e", "j_1 + j1 at j1=1, j_1=1"}).code == 2);
+    CHECK(run_cli({"eval", "-e", "j1 + j2 at j1=1, j2=1"}).code == 0);
+}
