@@ -9,6 +9,7 @@
 #include "model/rewrite.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
+#include "parse/lower.hpp"
 #include "print/print.hpp"
 
 namespace couplet::eval_detail {
@@ -143,6 +144,11 @@ private:
         if (!is_a<numeric>(e.op(1)) || !ex_to<numeric>(e.op(1)).is_rational())
             throw evaluation_error("cannot evaluate " + n.text + " exactly");
         numeric k = ex_to<numeric>(e.op(1));
+        // The parser bounds a written exponent; products of lets (W*W, doubled again and again)
+        // build larger ones, whose exact value would outgrow memory.
+        if (abs(k) > max_integer_exponent)
+            throw evaluation_error("the exponent " + to_text(k) + " in " + n.text + " is above the bound of " +
+                                   std::to_string(max_integer_exponent) + " for an integer power");
         n.children.push_back(build(e.op(0)));
         if (k.is_integer()) {
             n.kind = node_kind::power;

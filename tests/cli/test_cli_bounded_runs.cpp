@@ -61,3 +61,17 @@ TEST_CASE("self-verification of a product of many independent 3j is not quadrati
     auto r = run_cli({"simplify", "--time-limit", "5", "-e", product_of_threej(300)});
     CHECK(r.code == 0);
 }
+
+TEST_CASE("a power that lets doubled past the bound is refused, not computed", "[cli]") {
+    // W(i) = W(i-1)*W(i-1) forty times is a 6j to the power 2^40; evaluating it exactly filled
+    // gigabytes.  Each statement is refused at its line and the next still runs.
+    std::string text = "let W0 = 6j{a, b, c; d, e, f}\n";
+    for (int i = 1; i <= 40; ++i)
+        text += "let W" + std::to_string(i) + " = W" + std::to_string(i - 1) + "*W" + std::to_string(i - 1) + "\n";
+    text += "eval W40 at a=1, b=1, c=1, d=1, e=1, f=1\neval W3 at a=1, b=1, c=1, d=1, e=1, f=1\n";
+    auto r = run_cli({"eval", "--time-limit", "30", "-e", text});
+    CHECK(r.code == 2);
+    CHECK(r.err.find("the exponent 1099511627776") != std::string::npos);
+    // (1/6)^8: the 6j{1 1 1; 1 1 1} = 1/6 of GSL 2.7 gsl_sf_coupling_6j, to the power 2^3.
+    CHECK(r.out.substr(0, r.out.find(' ')) == "1/1679616");
+}
