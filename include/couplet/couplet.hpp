@@ -139,14 +139,21 @@ public:
     const statement& operator[](std::size_t k) const;
     const std::string& name() const;  // the input's name in messages
     const std::string& text() const;
+    // Statements that could not be read (parse_each only), in the order of the input.
+    const std::vector<input_error>& errors() const;
     const parts& internals() const { return *parts_; }
 
 private:
     std::shared_ptr<const parts> parts_;
 };
 
-// Throws input_error.  `name` is how messages call the input (a file name).
+// Throws input_error at the first statement that cannot be read.  `name` is how messages call
+// the input (a file name).
 program parse(const std::string& text, const std::string& name = "<expression>");
+// Reads every statement that can be read and keeps the errors of the others (errors()), which
+// run_all reports in their places.  A let that cannot be read leaves its name without a value.
+// Throws only where no statement can be told apart (an unclosed bracket, nesting too deep).
+program parse_each(const std::string& text, const std::string& name = "<expression>");
 
 // What a statement without a keyword means: simplify (default) or eval.
 enum class bare_meaning { simplify, eval };

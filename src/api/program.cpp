@@ -42,23 +42,35 @@ input_error as_input_error(const source_file& src, const user_error& e) {
     return input_error(e.what(), format_diagnostic(src, e), pos.line, pos.column);
 }
 
-program parse(const std::string& text, const std::string& name) {
+namespace {
+
+program read(const std::string& text, const std::string& name, bool lenient) {
     // A byte-order mark that an editor put before the first line is not part of the input.
     const bool marked = text.compare(0, 3, "\xEF\xBB\xBF") == 0;
-    auto p =
-        std::make_shared<program::parts>(program::parts{source_file(name, marked ? text.substr(3) : text), {}, {}});
+    auto p = std::make_shared<program::parts>(
+        program::parts{source_file(name, marked ? text.substr(3) : text), {}, {}, {}, {}});
     try {
-        p->lowered = read_program(p->source);
+        p->lowered = read_program(p->source, lenient);
     } catch (const user_error& e) {
         throw as_input_error(p->source, e);
     }
     for (const lowered_statement& s : p->lowered.statements) p->statements.push_back(public_view(p->source, s));
+    for (const user_error& e : p->lowered.errors) {
+        p->errors.push_back(as_input_error(p->source, e));
+        p->error_offsets.push_back(e.offset());
+    }
     return program(p);
 }
+
+}  // namespace
+
+program parse(const std::string& text, const std::string& name) { return read(text, name, false); }
+program parse_each(const std::string& text, const std::string& name) { return read(text, name, true); }
 
 std::size_t program::size() const { return parts_->statements.size(); }
 const statement& program::operator[](std::size_t k) const { return parts_->statements.at(k); }
 const std::string& program::name() const { return parts_->source.name(); }
 const std::string& program::text() const { return parts_->source.text(); }
+const std::vector<input_error>& program::errors() const { return parts_->errors; }
 
 }  // namespace couplet

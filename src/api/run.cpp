@@ -89,10 +89,17 @@ result run(const program& p, std::size_t k, const options& o, bare_meaning bare)
 void run_all(const program& p, const options& o, const std::function<void(const result&)>& each, bare_meaning bare,
              const std::function<void(const input_error&)>& failed) {
     const program::parts& parts = p.internals();
+    if (!parts.errors.empty() && !failed) throw parts.errors.front();
     scoped_run_limits in_force(limits_of(o));
-    std::size_t done = 0;  // statements finished
+    std::size_t done = 0;        // statements finished
+    std::size_t next_error = 0;  // statements that could not be read are reported in their places
+    auto report_errors_before = [&](std::size_t offset) {
+        for (; next_error < parts.errors.size() && parts.error_offsets[next_error] < offset; ++next_error)
+            failed(parts.errors[next_error]);
+    };
     try {
         for (std::size_t k = 0; k < parts.statements.size(); ++k) {
+            if (failed) report_errors_before(parts.statements[k].offset);
             try {
                 result r = run_one(parts, k, o, bare, done);
                 each(r);
@@ -107,6 +114,7 @@ void run_all(const program& p, const options& o, const std::function<void(const 
     } catch (const stopped_at& s) {
         throw stopped_error(parts, o, s);
     }
+    if (failed) report_errors_before(std::string::npos);
 }
 result simplify(const std::string& text, const options& o) { return last_statement(text, o, bare_meaning::simplify); }
 result eval(const std::string& text, const options& o) { return last_statement(text, o, bare_meaning::eval); }

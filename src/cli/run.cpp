@@ -21,8 +21,9 @@ namespace couplet::cli {
 namespace {
 
 const char* const exit_status_text =
-    R"(A statement that cannot be carried out is reported with its line and column, and the others
-still run; an error in the syntax or a name stops the whole input before anything runs.
+    R"(A statement that cannot be read or carried out is reported with its line and column, and the
+others still run (a let that cannot be read leaves its name without a value); only an unclosed
+bracket or nesting beyond the bound stops the whole input.
 Exit status: 0 done (every check holds), 1 a check fails, 2 bad input, a refused request or
 output that could not be written, 3 an internal check failed (a simplification changed the
 value; the input is printed as is); the highest that applies.)";
@@ -161,7 +162,7 @@ int run_input(const request& r, const std::string& name, const std::string& text
               std::ostream& err) {
     writer output(format_of(r), out);
     try {
-        const program input = parse(text, name);
+        const program input = parse_each(text, name);
         // Progress goes to a terminal only: piped or captured stderr stays clean.
         std::optional<terminal_progress> meter;
         if (&err == &std::cerr && isatty(fileno(stderr))) {

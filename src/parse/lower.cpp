@@ -1,10 +1,12 @@
 #include "parse/lower.hpp"
 
-#include <boost/variant/apply_visitor.hpp>
 #include <algorithm>
+#include <boost/variant/apply_visitor.hpp>
 #include <cctype>
 #include <functional>
 #include <map>
+#include <optional>
+#include <regex>
 #include <set>
 #include <sstream>
 
@@ -45,6 +47,13 @@ public:
         for (const auto& p : parsed)
             if (const auto* d = boost::get<ast::definition>(&p.tree))
                 later_definitions_.emplace(d->name.name, d->name.offset);
+    }
+
+    // A let that could not be read: its name has no value, and a use says why.
+    void failed_definition(const std::string& name, std::size_t offset) {
+        failed_definitions_.emplace(name, offset);
+        later_definitions_.erase(name);
+        defining_.clear();
     }
 
     lowered_statement statement(const parsed_statement& p) {
@@ -265,6 +274,9 @@ private:
     }
 
     ex node(const ast::identifier& id) {
+        if (auto it = failed_definitions_.find(id.name); it != failed_definitions_.end())
+            throw user_error(id.offset, "'" + id.name + "' has no value: its definition at " + where(it->second) +
+                                            " could not be read");
         if (id.name == defining_)
             throw user_error(id.offset,
                              "'" + id.name + "' is used in its own definition; a let cannot refer to itself");
@@ -409,7 +421,8 @@ private:
     lowered_program& out_;
     std::map<std::string, ex> definitions_;
     std::map<std::string, std::size_t> later_definitions_;
-    std::string defining_;  // the name of the let being lowered
+    std::string defining_;                                   // the name of the let being lowered
+    std::map<std::string, std::size_t> failed_definitions_;  // lets that could not be read
     // The names written in the expression being lowered (through the lets it uses), and in
     // each let's definition.
     std::set<std::string> written_;
@@ -438,15 +451,56 @@ void refuse_look_alikes(const quantum_numbers& numbers) {
 
 }  // namespace
 
-lowered_program lower_program(const source_file& src, const std::vector<parsed_statement>& parsed) {
+// The name a statement that could not be parsed would have defined, if it reads `let NAME`.
+std::optional<std::pair<std::string, std::size_t>> let_name_of(const source_file& src, std::size_t offset) {
+    static const std::regex let(R"(^\s*let\s+([A-Za-z_][A-Za-z0-9_']*))");
+    const std::string& text = src.text();
+    const std::size_t end = std::min(text.size(), text.find('\n', offset));
+    std::smatch m;
+    const std::string line = text.substr(offset, end - offset);
+    if (!std::regex_search(line, m, let)) return std::nullopt;
+    return std::make_pair(m[1].str(), offset + static_cast<std::size_t>(m.position(1)));
+}
+
+lowered_program lower_program(const source_file& src, const std::vector<parsed_statement>& parsed, bool lenient,
+                              const std::vector<std::pair<std::string, std::size_t>>& lost_lets) {
     lowered_program out;
     lowering l(src, out);
+    for (const auto& [name, offset] : lost_lets) l.failed_definition(name, offset);
     l.collect_definitions(parsed);
-    for (const parsed_statement& p : parsed) out.statements.push_back(l.statement(p));
-    refuse_look_alikes(out.numbers);
+    // Lenient: an error ends its statement only; a let that fails leaves its name without a value.
+    auto attempt = [&](const auto& step, const ast::definition* defining) {
+        try {
+            step();
+        } catch (const user_error& e) {
+            if (!lenient) throw;
+            out.errors.push_back(e);
+            if (defining) l.failed_definition(defining->name.name, defining->name.offset);
+        }
+    };
+    for (const parsed_statement& p : parsed)
+        attempt([&] { out.statements.push_back(l.statement(p)); }, boost::get<ast::definition>(&p.tree));
+    attempt([&] { refuse_look_alikes(out.numbers); }, nullptr);
     return out;
 }
 
-lowered_program read_program(const source_file& src) { return lower_program(src, parse_program(src)); }
+lowered_program read_program(const source_file& src, bool lenient) {
+    if (!lenient) return lower_program(src, parse_program(src));
+    std::vector<user_error> unparsed;
+    std::vector<parsed_statement> parsed = parse_program(src, &unparsed);
+    // A let that did not parse still names something: later uses must not take it for a new
+    // quantum number.  Found by its statement's first words.
+    std::vector<std::pair<std::string, std::size_t>> lost_lets;
+    for (const user_error& e : unparsed) {
+        for (const statement_span& span : split_statements(src))
+            if (span.begin <= e.offset() && e.offset() <= span.end)
+                if (auto name = let_name_of(src, span.begin)) lost_lets.push_back(*name);
+    }
+    lowered_program out = lower_program(src, parsed, true, lost_lets);
+    out.errors.insert(out.errors.end(), unparsed.begin(), unparsed.end());
+    std::stable_sort(out.errors.begin(), out.errors.end(),
+                     [](const user_error& a, const user_error& b) { return a.offset() < b.offset(); });
+    return out;
+}
 
 }  // namespace couplet

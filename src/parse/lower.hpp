@@ -5,6 +5,7 @@
 
 #include <cstddef>
 #include <string>
+#include <utility>
 #include <vector>
 
 #include "model/quantum.hpp"
@@ -40,14 +41,20 @@ struct lowered_statement {
 struct lowered_program {
     quantum_numbers numbers;
     std::vector<lowered_statement> statements;
+    // Read leniently: the statements that could not be read, in the order of the input; the
+    // others are in `statements`.
+    std::vector<user_error> errors;
 };
 
 // Throws user_error for every semantic error (wrong entry counts, role conflicts, undefined
 // names, sum indices absent from their body, inadmissible `at` values, ...).
-lowered_program lower_program(const source_file& src, const std::vector<parsed_statement>& parsed);
+lowered_program lower_program(const source_file& src, const std::vector<parsed_statement>& parsed, bool lenient = false,
+                              const std::vector<std::pair<std::string, std::size_t>>& lost_lets = {});
 
 // parse + lower.
-lowered_program read_program(const source_file& src);
+// Lenient: every statement that can be read is, the others go to `errors` (a let that fails
+// leaves its name without a value, and a later use says so); strict: the first error is thrown.
+lowered_program read_program(const source_file& src, bool lenient = false);
 
 // True when e is c0 + sum c_i * x_i with rational c's and symbols x_i.
 }  // namespace couplet

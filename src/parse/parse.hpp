@@ -26,6 +26,8 @@ struct parsed_statement {
 // nesting depth on the way.
 std::vector<statement_span> split_statements(const source_file& src);
 
-std::vector<parsed_statement> parse_program(const source_file& src);
+// With `errors`, a statement that does not parse is recorded there and left out; without, its
+// error is thrown.  An unclosed bracket or nesting beyond the bound is thrown either way.
+std::vector<parsed_statement> parse_program(const source_file& src, std::vector<user_error>* errors = nullptr);
 
 }  // namespace couplet

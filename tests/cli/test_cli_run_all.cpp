@@ -9,6 +9,7 @@
 #include <streambuf>
 
 #include "cli/run.hpp"
+#include "couplet/couplet.hpp"
 #include "support.hpp"
 
 using couplet::testing::run_cli;
@@ -179,4 +180,38 @@ TEST_CASE("names that LaTeX would print alike are refused", "[cli]") {
     CHECK(r.err.find("print alike in LaTeX") != std::string::npos);
     CHECK(run_cli({"eval", "-e", "j_1 + j1 at j1=1, j_1=1"}).code == 2);
     CHECK(run_cli({"eval", "-e", "j1 + j2 at j1=1, j2=1"}).code == 0);
+}
+
+TEST_CASE("statements that cannot be read are reported in their places and the others run", "[cli]") {
+    const std::string text =
+        "eval 1\n"
+        "let W = 6j{1.5, 1, 1; 1, 1, 1}\n"  // a syntax error in a let
+        "eval W\n"                          // its name has no value
+        "eval 2 +\n"                        // a syntax error
+        "eval 3\n";
+    auto r = run_cli({"eval", "-e", text});
+    CHECK(r.code == 2);
+    CHECK(r.out == "1  ~ 1.0000000000000000000\n3  ~ 3.0000000000000000000\n");
+    CHECK(r.err.find("<expression>:2:13: error:") != std::string::npos);
+    CHECK(r.err.find("<expression>:3:6: error: 'W' has no value: its definition at 2:5 could not be read") !=
+          std::string::npos);
+    CHECK(r.err.find("<expression>:4:9: error:") != std::string::npos);
+    // In JSON the errors stand in their places among the results.
+    auto j = run_cli({"eval", "--format", "json", "-e", text});
+    std::istringstream lines(j.out);
+    std::vector<int> order;
+    for (std::string line; std::getline(lines, line);) order.push_back(nlohmann::json::parse(line).at("line"));
+    CHECK(order == std::vector<int>{1, 2, 3, 4, 5});
+}
+
+TEST_CASE("the library reads strictly or statement by statement", "[api]") {
+    CHECK_THROWS_AS(couplet::parse("eval 1\neval 2 +\neval 3"), couplet::input_error);
+    couplet::program p = couplet::parse_each("eval 1\neval 2 +\neval 3");
+    CHECK(p.size() == 2);
+    REQUIRE(p.errors().size() == 1);
+    CHECK(p.errors().front().line() == 2);
+    // Without an error handler, run_all refuses a program with errors before running anything.
+    int ran = 0;
+    CHECK_THROWS_AS(couplet::run_all(p, {}, [&](const couplet::result&) { ++ran; }), couplet::input_error);
+    CHECK(ran == 0);
 }
