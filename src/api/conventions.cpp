@@ -51,7 +51,8 @@ std::string bounds_text() {
        << "  nesting of parentheses, calls and powers at most " << max_nesting << " deep; numbers of at most "
        << max_number_digits << " digits;\n"
        << "  integer powers x^n with |n| <= " << max_integer_exponent << ", and a power of numbers of at most "
-       << max_computed_digits << " digits.\n\n";
+       << max_computed_digits << " digits;\n"
+       << "  a let nested at most " << max_definition_depth << " levels deep through the lets it uses.\n\n";
     return os.str();
 }
 
