@@ -76,8 +76,9 @@ TEST_CASE("time-limit: stops after the finished statements and says so", "[cli][
 
 TEST_CASE("the help states every bound with its value", "[cli][bounds]") {
     auto r = run_cli({"--help"});
-    for (const char* text : {"--max-terms N (default 100000)", "--time-limit S", "2j <= 20000", "10000000 summands",
-                             "200 deep", "200 digits", "|n| <= 1000"})
+    for (const char* text :
+         {"--max-terms N (default 100000)", "--time-limit S", "2j <= 20000", "10000000 summands", "200 deep",
+          "200 digits", "|n| <= 1000", "at most 10000 digits", "at most 1000 levels deep"})
         CHECK(r.out.find(text) != std::string::npos);
 }
 
