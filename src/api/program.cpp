@@ -47,18 +47,15 @@ namespace {
 program read(const std::string& text, const std::string& name, bool lenient) {
     // A byte-order mark that an editor put before the first line is not part of the input.
     const bool marked = text.compare(0, 3, "\xEF\xBB\xBF") == 0;
-    auto p = std::make_shared<program::parts>(
-        program::parts{source_file(name, marked ? text.substr(3) : text), {}, {}, {}, {}});
+    auto p =
+        std::make_shared<program::parts>(program::parts{source_file(name, marked ? text.substr(3) : text), {}, {}, {}});
     try {
         p->lowered = read_program(p->source, lenient);
     } catch (const user_error& e) {
         throw as_input_error(p->source, e);
     }
     for (const lowered_statement& s : p->lowered.statements) p->statements.push_back(public_view(p->source, s));
-    for (const user_error& e : p->lowered.errors) {
-        p->errors.push_back(as_input_error(p->source, e));
-        p->error_offsets.push_back(e.offset());
-    }
+    for (const user_error& e : p->lowered.errors) p->errors.push_back(as_input_error(p->source, e));
     return program(p);
 }
 

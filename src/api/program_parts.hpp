@@ -14,8 +14,7 @@ struct program::parts {
     source_file source;
     lowered_program lowered;
     std::vector<statement> statements;
-    std::vector<input_error> errors;         // statements that could not be read
-    std::vector<std::size_t> error_offsets;  // where each of them stands, for run_all's order
+    std::vector<input_error> errors;  // lowered.errors as the public type, same order
 };
 
 // A user_error of `src` as the public input_error, its diagnostic formatted against `src`.

@@ -86,6 +86,7 @@ result run(const program& p, std::size_t k, const options& o, bare_meaning bare)
         throw stopped_error(parts, o, s);
     }
 }
+
 void run_all(const program& p, const options& o, const std::function<void(const result&)>& each, bare_meaning bare,
              const std::function<void(const input_error&)>& failed) {
     const program::parts& parts = p.internals();
@@ -94,7 +95,7 @@ void run_all(const program& p, const options& o, const std::function<void(const 
     std::size_t done = 0;        // statements finished
     std::size_t next_error = 0;  // statements that could not be read are reported in their places
     auto report_errors_before = [&](std::size_t offset) {
-        for (; next_error < parts.errors.size() && parts.error_offsets[next_error] < offset; ++next_error)
+        for (; next_error < parts.errors.size() && parts.lowered.errors[next_error].offset() < offset; ++next_error)
             failed(parts.errors[next_error]);
     };
     try {
@@ -116,6 +117,7 @@ void run_all(const program& p, const options& o, const std::function<void(const 
     }
     if (failed) report_errors_before(std::string::npos);
 }
+
 result simplify(const std::string& text, const options& o) { return last_statement(text, o, bare_meaning::simplify); }
 result eval(const std::string& text, const options& o) { return last_statement(text, o, bare_meaning::eval); }
 result check(const std::string& text, const options& o) {

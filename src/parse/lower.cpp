@@ -122,11 +122,11 @@ private:
         s.kind = request_kind::eval;
         written_.clear();
         s.value = expression(r.value);
-        auto present = symbols_in(s.value);
         for (const ast::assignment& a : r.at) {
             const quantum_number* q = out_.numbers.find(a.name.name);
-            // A name the expression was written with counts even where it cancelled (0*x).
-            if (!q || (!present.count(q->symbol) && !written_.count(a.name.name)))
+            // Every name of the value was written (here or in a let it uses); one that was
+            // written counts even where it cancelled (0*x).
+            if (!q || !written_.count(a.name.name))
                 throw user_error(a.name.offset, "'" + a.name.name + "' does not occur in the expression to evaluate");
             // A copy: lowering the value can add names to the table and move its entries.
             const symbol assigned = q->symbol;
@@ -486,18 +486,15 @@ lowered_program lower_program(const source_file& src, const std::vector<parsed_s
 
 lowered_program read_program(const source_file& src, bool lenient) {
     if (!lenient) return lower_program(src, parse_program(src));
-    std::vector<user_error> unparsed;
+    std::vector<unparsed_statement> unparsed;
     std::vector<parsed_statement> parsed = parse_program(src, &unparsed);
     // A let that did not parse still names something: later uses must not take it for a new
     // quantum number.  Found by its statement's first words.
     std::vector<std::pair<std::string, std::size_t>> lost_lets;
-    for (const user_error& e : unparsed) {
-        for (const statement_span& span : split_statements(src))
-            if (span.begin <= e.offset() && e.offset() <= span.end)
-                if (auto name = let_name_of(src, span.begin)) lost_lets.push_back(*name);
-    }
+    for (const unparsed_statement& u : unparsed)
+        if (auto name = let_name_of(src, u.span.begin)) lost_lets.push_back(*name);
     lowered_program out = lower_program(src, parsed, true, lost_lets);
-    out.errors.insert(out.errors.end(), unparsed.begin(), unparsed.end());
+    for (const unparsed_statement& u : unparsed) out.errors.push_back(u.error);
     std::stable_sort(out.errors.begin(), out.errors.end(),
                      [](const user_error& a, const user_error& b) { return a.offset() < b.offset(); });
     return out;

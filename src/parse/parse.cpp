@@ -65,14 +65,14 @@ ast::statement parse_one(const source_file& src, statement_span span) {
 
 }  // namespace
 
-std::vector<parsed_statement> parse_program(const source_file& src, std::vector<user_error>* errors) {
+std::vector<parsed_statement> parse_program(const source_file& src, std::vector<unparsed_statement>* errors) {
     std::vector<parsed_statement> out;
     for (const statement_span& span : split_statements(src)) {
         try {
             out.push_back({parse_one(src, span), span});
         } catch (const user_error& e) {
             if (!errors) throw;
-            errors->push_back(e);
+            errors->push_back({span, e});
         }
     }
     return out;

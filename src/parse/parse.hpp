@@ -28,6 +28,10 @@ std::vector<statement_span> split_statements(const source_file& src);
 
 // With `errors`, a statement that does not parse is recorded there and left out; without, its
 // error is thrown.  An unclosed bracket or nesting beyond the bound is thrown either way.
-std::vector<parsed_statement> parse_program(const source_file& src, std::vector<user_error>* errors = nullptr);
+struct unparsed_statement {
+    statement_span span;
+    user_error error;
+};
+std::vector<parsed_statement> parse_program(const source_file& src, std::vector<unparsed_statement>* errors = nullptr);
 
 }  // namespace couplet

@@ -286,8 +286,11 @@ private:
         auto reach = reach_.find(f.symbol.get_name());
         if (reach == reach_.end() || !reach->second.owner) return;
         const ex& owner = *reach->second.owner;
-        for (const_preorder_iterator it = owner.preorder_begin(); it != owner.preorder_end(); ++it)
-            if (is_a<symbol>(*it) && d.index_of(ex_to<symbol>(*it).get_name()) >= k) return;
+        for (const_preorder_iterator it = owner.preorder_begin(); it != owner.preorder_end(); ++it) {
+            if (!is_a<symbol>(*it)) continue;
+            auto at = index.find(ex_to<symbol>(*it).get_name());
+            if (at == index.end() || at->second >= k) return;  // the owner is not sampled before m
+        }
         cln::cl_RA shift = reach->second.plain ? cln::cl_RA(0) : *reach->second.smallest_shift;
         const ex m = f.symbol;
         const numeric s{cln::cl_N(shift)};
