@@ -11,6 +11,7 @@
 #include <sstream>
 
 #include "model/rewrite.hpp"
+#include "model/structure.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
 
@@ -139,11 +140,11 @@ private:
                                  "the value of '" + a.name.name + "' must be a number like 1, -2 or 3/2");
             s.at.push_back({assigned, ex_to<numeric>(v), a.value.offset});
         }
-        for (const value_assignment& a : s.at) check_admissible(a, s.at);
+        for (const value_assignment& a : s.at) check_admissible(a, s.at, s.value);
     }
 
-    // j >= 0 in (1/2)N, parity as declared, and j - m integer where j is known.
-    void check_admissible(const value_assignment& a, const std::vector<value_assignment>& all) {
+    // j >= 0 in (1/2)N, parity as declared, and j - m integer in the value's own columns.
+    void check_admissible(const value_assignment& a, const std::vector<value_assignment>& all, const ex& value) {
         const quantum_number& q = out_.numbers.at(a.name);
         const std::string shown = q.name + "=" + to_text(a.value);
         if (!(2 * a.value).is_integer())
@@ -157,14 +158,34 @@ private:
         // plain variable (a projection that survived only in delta(m3, m4)) may be negative.
         if (q.role == qn_role::angular && a.value.is_negative())
             throw user_error(a.offset, shown + " is not admissible: an angular momentum is never negative");
-        if (q.role == qn_role::projection && q.owner) {
-            exmap values;
-            for (const value_assignment& b : all) values[b.name] = b.value;
-            ex j = q.owner->subs(values);
-            if (is_a<numeric>(j) && !(ex_to<numeric>(j) - a.value).is_integer())
-                throw user_error(a.offset, shown + " is not admissible: its angular momentum is " +
-                                               to_text(ex_to<numeric>(j)) + ", and j - m must be an integer");
+        check_columns(a, shown, all, value);
+    }
+
+    // The columns (j, m) of this value that hold the name, not the program's first pairing of
+    // it: another statement may put the same m under a j of the other parity.  A compound entry
+    // is judged by its value (m-1/2 at m=1 is 1/2).  Refused only when no such column admits
+    // the value; where one does, the others' selection rules make the symbol 0.
+    void check_columns(const value_assignment& a, const std::string& shown, const std::vector<value_assignment>& all,
+                       const ex& value) {
+        exmap values;
+        for (const value_assignment& b : all) values[b.name] = b.value;
+        coupling_structure columns;
+        for (const_preorder_iterator it = value.preorder_begin(); it != value.preorder_end(); ++it)
+            add_structure(*it, columns);
+        std::optional<std::string> refusal;
+        for (const auto& [j_form, m_form] : columns.projections) {
+            if (!m_form.has(a.name)) continue;
+            const ex j = j_form.subs(values), m = m_form.subs(values);
+            if (!is_a<numeric>(j) || !is_a<numeric>(m)) continue;
+            if ((ex_to<numeric>(j) - ex_to<numeric>(m)).is_integer()) return;
+            if (refusal) continue;
+            refusal = m_form.is_equal(a.name)
+                          ? "its angular momentum is " + to_text(ex_to<numeric>(j))
+                          : "its entry " + couplet::to_text(m_form) + " = " + to_text(ex_to<numeric>(m)) +
+                                " stands under the angular momentum " + to_text(ex_to<numeric>(j));
         }
+        if (refusal)
+            throw user_error(a.offset, shown + " is not admissible: " + *refusal + ", and j - m must be an integer");
     }
 
     // ---- expressions ---------------------------------------------------------------------

@@ -106,3 +106,40 @@ TEST_CASE("the proof-only phase walk refuses exactly what the reduction refuses"
         CHECK(reduction_refuses == (text.find("(a+b)") != std::string::npos));
     }
 }
+
+namespace {
+
+// The message of the error that lowering `program` raises, or "" when it lowers.
+std::string lowering_error(const std::string& program) {
+    try {
+        testing::lower_text(program);
+    } catch (const user_error& e) {
+        return e.what();
+    }
+    return "";
+}
+
+}  // namespace
+
+TEST_CASE("an eval's values are judged by the columns of its own value", "[model]") {
+    // The same name under j = 1/2 on one line and j = 1 on the next: each line is admissible
+    // on its own (j - m integral in its own column).
+    CHECK(lowering_error("eval 3j(1/2, 1, 1/2; n, -1, 1/2) at n=1/2\neval 3j(1, 1, 1; n, -1, 0) at n=1") == "");
+    // A compound entry is judged by its value: m - 1/2 = 1/2 under j = 1/2.
+    CHECK(lowering_error("eval 3j(1/2, 1, 1/2; m-1/2, -1, 1/2) at m=1") == "");
+    // A name under j's of both parities: one column admits it, the other's selection rule
+    // makes the symbol 0 (DLMF 34.2: j - m must be an integer).
+    CHECK(lowering_error("eval 3j(1/2, 1, 1/2; n, n, -2*n) at n=1/2") == "");
+    // No column admits it: refused, the compound entry named with its value.
+    CHECK_THAT(lowering_error("eval 3j(1, 1, 1; n, -1, 0) at n=1/2"),
+               Catch::Contains("its angular momentum is 1, and j - m must be an integer"));
+    CHECK_THAT(lowering_error("eval 3j(1, 1, 1; n+1/2, -1, 0) at n=1"),
+               Catch::Contains("its entry n+1/2 = 3/2 stands under the angular momentum 1"));
+}
+
+TEST_CASE("a value inadmissible in one column of two evaluates to 0", "[model][eval]") {
+    // 3j(1/2, 1, 1/2; 1/2, 1/2, -1): the middle column has j - m = 1/2 (DLMF 34.2), so 0.
+    const auto r = testing::run_cli({"eval", "-e", "eval 3j(1/2, 1, 1/2; n, n, -2*n) at n=1/2"});
+    CHECK(r.code == 0);
+    CHECK_THAT(r.out, Catch::StartsWith("0"));
+}
