@@ -47,7 +47,7 @@ std::string bounds_text() {
        << "  --max-terms N (default " << run_limits{}.max_terms << ") terms from expanding one expression or one\n"
        << "    sum's body;  --time-limit S (default none) wall-clock seconds for the whole input;\n"
        << "  2j <= " << eval.max_twice_j << " for every entry of a symbol; " << eval.max_sum_terms
-       << " summands in one evaluation;\n"
+       << " summands in one evaluation (a 9j counts\n    the terms of its series);\n"
        << "  nesting of parentheses, calls and powers at most " << max_nesting << " deep; numbers of at most "
        << max_number_digits << " digits;\n"
        << "  integer powers x^n with |n| <= " << max_integer_exponent << ", and a power of numbers of at most "

@@ -4,11 +4,13 @@
 #pragma once
 
 #include <optional>
+#include <string>
 
 #include "eval/compiled.hpp"
 #include "eval/evaluate.hpp"
 #include "exact/admissibility.hpp"
 #include "exact/wigner.hpp"
+#include "limits/run_limits.hpp"
 
 namespace couplet::eval_detail {
 
@@ -69,7 +71,17 @@ public:
     }
 
 protected:
-    explicit node_runner(symbol_memo* memo) : memo_(memo) {}
+    node_runner(symbol_memo* memo, long max_terms) : memo_(memo), max_terms_(max_terms) {}
+
+    // One bound on the work of a call, --max-sum-terms in effect: every summand of the sums,
+    // and every term of a 9j's series, which grows as the cube of its j's.
+    void count_terms(long terms, const std::string& what) {
+        const long before = terms_;
+        terms_ += terms;
+        if (terms_ > max_terms_)
+            throw evaluation_error(what + " need more than " + std::to_string(max_terms_) + " terms at this point");
+        if (terms_ / 64 != before / 64) check_deadline();  // --time-limit reaches into long sums
+    }
 
 private:
     Values& self() { return static_cast<Values&>(*this); }
@@ -88,9 +100,14 @@ private:
             if (!v) return exact::number();  // not a quantum number: the symbol vanishes
             t[k] = *v;
         }
+        if (memo_) {
+            auto it = memo_->values.find(t);
+            if (it != memo_->values.end()) return it->second;
+        }
+        if (n.kind == node_kind::ninej)
+            count_terms(exact::ninej_series_terms(t[0], t[1], t[2], t[3], t[4], t[5], t[6], t[7], t[8]),
+                        "the series of " + n.text);
         if (!memo_) return compute(n.kind, t);
-        auto it = memo_->values.find(t);
-        if (it != memo_->values.end()) return it->second;
         if (memo_->values.size() >= symbol_memo::capacity) memo_->values.clear();
         return memo_->values.emplace(t, compute(n.kind, t)).first->second;
     }
@@ -109,6 +126,8 @@ private:
     }
 
     symbol_memo* memo_;
+    long max_terms_;
+    long terms_ = 0;
 };
 
 }  // namespace couplet::eval_detail

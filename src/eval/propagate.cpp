@@ -36,7 +36,7 @@ std::string rational_text(long numerator, long denominator) {
 class propagating : public node_runner<propagating> {
 public:
     propagating(program& p, const evaluation_limits& limits)
-        : node_runner(&p.memo), p_(p), limits_(limits), t_(p.slot_names.size(), 0) {}
+        : node_runner(&p.memo, limits.max_sum_terms), p_(p), limits_(limits), t_(p.slot_names.size(), 0) {}
 
     void assign(int slot, long doubled) { t_[slot] = doubled; }
 
@@ -171,10 +171,7 @@ private:
                  const std::exception_ptr& undefined, totals& sum) {
         if (k == s.plan.steps.size()) {
             if (undefined) std::rethrow_exception(undefined);
-            if (++evaluations_ > limits_.max_sum_terms)
-                throw evaluation_error("the sums need more than " + std::to_string(limits_.max_sum_terms) +
-                                       " terms at this point");
-            if (evaluations_ % 64 == 0) check_deadline();  // --time-limit reaches into long sums
+            count_terms(1, "the sums");
             (negative ? sum.negative : sum.positive) += partial;
             return;
         }
@@ -230,7 +227,6 @@ private:
     program& p_;
     const evaluation_limits& limits_;
     std::vector<long> t_;
-    long evaluations_ = 0;
 };
 
 }  // namespace

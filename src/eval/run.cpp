@@ -38,7 +38,7 @@ std::string show(const cln::cl_RA& q) {
 class machine : public eval_detail::node_runner<machine> {
 public:
     machine(const eval_detail::program& p, const evaluation_limits& limits)
-        : node_runner(nullptr),
+        : node_runner(nullptr, limits.max_sum_terms),
           p_(p),
           limits_(limits),
           value_(p.slot_names.size()),
@@ -143,10 +143,7 @@ public:
         for (const selection_rule& rule : s.rules)
             if (evaluable(rule.form) && !rule_holds(rule)) return exact::number();
         if (open.empty()) {
-            if (++evaluations_ > limits_.max_sum_terms)
-                throw evaluation_error("the sums need more than " + std::to_string(limits_.max_sum_terms) +
-                                       " terms at this point");
-            if (evaluations_ % 64 == 0) check_deadline();  // --time-limit reaches into long sums
+            count_terms(1, "the sums");
             return run(*s.body);
         }
         // Enumerate next the index with the narrowest finite range.
@@ -191,7 +188,6 @@ public:
     const evaluation_limits& limits_;
     std::vector<cln::cl_RA> value_;
     std::vector<bool> known_;
-    long evaluations_ = 0;
 };
 
 }  // namespace

@@ -19,6 +19,7 @@
 #include <algorithm>
 #include <array>
 #include <cstdlib>
+#include <utility>
 #include <vector>
 
 namespace couplet::exact {
@@ -45,19 +46,37 @@ struct ninej_terms {
     }
 };
 
+// The range of x in the sum, doubled; empty when first > last.
+std::pair<long, long> x_range(long ta, long tb, long td, long tf, long th, long ti) {
+    return {std::max({std::labs(ta - ti), std::labs(tb - tf), std::labs(td - th)}),
+            std::min({ta + ti, tb + tf, td + th})};
+}
+
+bool admissible(long ta, long tb, long tc, long td, long te, long tf, long tg, long th, long ti) {
+    return triangle(ta, tb, tc) && triangle(td, te, tf) && triangle(tg, th, ti) && triangle(ta, td, tg) &&
+           triangle(tb, te, th) && triangle(tc, tf, ti);
+}
+
 }  // namespace
 
+long ninej_series_terms(long ta, long tb, long tc, long td, long te, long tf, long tg, long th, long ti) {
+    if (!admissible(ta, tb, tc, td, te, tf, tg, th, ti)) return 0;
+    const ninej_terms nine{ta, tb, tc, td, te, tf, tg, th, ti};
+    const auto [x_min, x_max] = x_range(ta, tb, td, tf, th, ti);
+    long terms = 0;
+    for (long x = x_min; x <= x_max; x += 2)
+        for (const auto& one : nine.series(x)) terms += one.empty() ? 0 : one.last - one.first + 1;
+    return terms;
+}
+
 number ninej(long ta, long tb, long tc, long td, long te, long tf, long tg, long th, long ti) {
-    if (!triangle(ta, tb, tc) || !triangle(td, te, tf) || !triangle(tg, th, ti) || !triangle(ta, td, tg) ||
-        !triangle(tb, te, th) || !triangle(tc, tf, ti))
-        return number();
+    if (!admissible(ta, tb, tc, td, te, tf, tg, th, ti)) return number();
     detail::check_doubled_arguments("ninej", {ta, tb, tc, td, te, tf, tg, th, ti});
     const ninej_terms nine{ta, tb, tc, td, te, tf, tg, th, ti};
 
     // x couples with (a, i), (f, b) and (d, h); the three bounds share one parity because
     // the rows and columns are triads.
-    const long x_min = std::max({std::labs(ta - ti), std::labs(tb - tf), std::labs(td - th)});
-    const long x_max = std::min({ta + ti, tb + tf, td + th});
+    const auto [x_min, x_max] = x_range(ta, tb, td, tf, th, ti);
     if (x_min > x_max) return number();
 
     factorial_table& table = shared_factorial_table();

@@ -23,4 +23,8 @@ number sixj(long ta, long tb, long tc, long td, long te, long tf);
 // {a b c; d e f; g h i}, row by row; DLMF 34.6.2 (summed over x of three 6j symbols).
 number ninej(long ta, long tb, long tc, long td, long te, long tf, long tg, long th, long ti);
 
+// How many terms the Racah series of ninej() add up over its x-sum, known before any is
+// computed: a 9j's cost grows as the cube of its j's, so a caller bounds it by this count.
+long ninej_series_terms(long ta, long tb, long tc, long td, long te, long tf, long tg, long th, long ti);
+
 }  // namespace couplet::exact

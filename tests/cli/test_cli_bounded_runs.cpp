@@ -43,10 +43,25 @@ TEST_CASE("printing a deeply nested expression takes time in proportion to its s
 }
 
 TEST_CASE("the time limit stops the exact evaluation of a 9j with large entries", "[cli]") {
-    // The x-sum of a 9j with all entries 5000 runs for minutes; the limit ends it within a second.
-    auto r = run_cli({"eval", "--time-limit", "1", "-e", "9j{5000, 5000, 5000; 5000, 5000, 5000; 5000, 5000, 5000}"});
+    // All entries 1500: under the term bound (about 6.8e6 series terms) but tens of seconds of
+    // big-number work; the limit ends it within a second.
+    auto r = run_cli({"eval", "--time-limit", "1", "-e", "9j{1500, 1500, 1500; 1500, 1500, 1500; 1500, 1500, 1500}"});
     CHECK(r.code == 2);
     CHECK(r.err.find("stopped: the time limit of 1 s") != std::string::npos);
+}
+
+TEST_CASE("the bound on summands counts the series of a 9j before computing it", "[cli]") {
+    // All entries 5000: about 7.5e7 series terms (x takes 5001 values, three 6j series of up to
+    // 5001 terms each), refused at once whatever the time limit.
+    auto r = run_cli({"eval", "-e", "9j{5000, 5000, 5000; 5000, 5000, 5000; 5000, 5000, 5000}"});
+    CHECK(r.code == 2);
+    CHECK(r.err.find("need more than 10000000 terms") != std::string::npos);
+    // The same bound over a sum of 9j symbols: the terms of every 9j of the sum add up.
+    auto summed = run_cli({"eval", "-e", "sum(x : 9j{a, a, x; a, a, x; x, x, x}) at a=3000"});
+    CHECK(summed.code == 2);
+    CHECK(summed.err.find("need more than 10000000 terms") != std::string::npos);
+    // A 9j of entries 500 stays well inside it (about 7.5e5 terms).
+    CHECK(run_cli({"eval", "-e", "9j{500, 500, 500; 500, 500, 500; 500, 500, 500}"}).code == 0);
 }
 
 TEST_CASE("the term bound (--max-terms) looks inside a root", "[cli]") {
