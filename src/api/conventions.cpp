@@ -25,11 +25,12 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
   eval EXPR [at a=1/2, m=0]    exact value and a decimal
   3j(j1, j2, j3; m1, m2, m3)   6j{a, b, c; d, e, f}   9j{a, b, c; d, e, f; g, h, i}
   <j1 m1, j2 m2 | J M>         (-1)^(EXPR)  sqrt(EXPR)  delta(x, y)  tri(a, b, c)
+  proj(j, m)                   1 when m is one of -j..j (m a projection of j), else 0
   sum(i, k : EXPR)             + - * / ^ and parentheses; numbers like 3 and 1/2
 
 Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
 collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product
-imposes it; never more sums (then symbols, then terms) than the input in canonical form.
+imposes it, proj(j, m) only where a phase holds m and no column does; never more sums (then symbols, then terms) than the input in canonical form.
 
 Checks and simplifications are verified by exact evaluation at every admissible point with
 all free j <= --depth (default 2; at most 4000 points, chosen at random beyond that)

@@ -13,9 +13,9 @@ using GiNaC::ex;
 
 namespace {
 
-bool has_triangle(const ex& e) {
+bool has_kind(const ex& e, symbol_kind k) {
     for (GiNaC::const_preorder_iterator it = e.preorder_begin(); it != e.preorder_end(); ++it)
-        if (kind_of(*it) == symbol_kind::triangle) return true;
+        if (kind_of(*it) == k) return true;
     return false;
 }
 
@@ -83,10 +83,17 @@ ex latex_document::named(const ex& e) const {
 }
 
 void latex_document::legend_for(const ex& e) {
-    if (!document_ || triangle_explained_ || !has_triangle(e)) return;
-    triangle_explained_ = true;
-    out_ << "\nHere $\\{a\\, b\\, c\\}$ stands for the triangle condition: it is $1$ when "
-            "$|a-b| \\le c \\le a+b$ and $a+b+c$ is an integer, and $0$ otherwise.\n\n";
+    if (!document_) return;
+    if (!triangle_explained_ && has_kind(e, symbol_kind::triangle)) {
+        triangle_explained_ = true;
+        out_ << "\nHere $\\{a\\, b\\, c\\}$ stands for the triangle condition: it is $1$ when "
+                "$|a-b| \\le c \\le a+b$ and $a+b+c$ is an integer, and $0$ otherwise.\n\n";
+    }
+    if (!projection_explained_ && has_kind(e, symbol_kind::projection)) {
+        projection_explained_ = true;
+        out_ << "\nHere $[\\,|m| \\le j\\,]$ is $1$ when $m$ is one of the projections "
+                "$-j, -j+1, \\ldots, j$ of $j$, and $0$ otherwise.\n\n";
+    }
 }
 
 void latex_document::statement(const source_file& src, const result& r) {

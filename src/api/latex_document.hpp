@@ -1,9 +1,9 @@
 // The LaTeX form of a run: a document (or with --fragment only the formulas) in which each
 // statement is a display that fits the text width; `#` comments become paragraphs, `let` names
-// are typeset as named quantities and used by name afterwards, the triangle condition gets a
-// legend where it first appears, a check shows its verdict in words, an eval its exact value,
-// the point and the decimal, and with --steps a simplification shows each step with the
-// identity it used.
+// are typeset as named quantities and used by name afterwards, the triangle condition and the
+// projection bracket get a legend where they first appear, a check shows its verdict in words,
+// an eval its exact value, the point and the decimal, and with --steps a simplification shows
+// each step with the identity it used.
 #pragma once
 
 #include <ginac/ginac.h>
@@ -45,6 +45,7 @@ private:
     std::size_t read_up_to_ = 0;                          // source offset consumed by comments
     std::vector<std::pair<GiNaC::ex, GiNaC::ex>> names_;  // (value, symbol) of each `let`
     bool triangle_explained_ = false;
+    bool projection_explained_ = false;
 };
 
 }  // namespace couplet

@@ -183,6 +183,9 @@ private:
             case symbol_kind::triangle:
                 n.kind = node_kind::triangle;
                 break;
+            case symbol_kind::projection:
+                n.kind = node_kind::projection;
+                break;
             default:
                 throw evaluation_error("cannot evaluate " + n.text);
         }
@@ -241,6 +244,7 @@ private:
             case node_kind::sixj:
             case node_kind::ninej:
             case node_kind::triangle:
+            case node_kind::projection:
             case node_kind::delta: {
                 coupling_structure st;
                 add_structure(n.source, st);

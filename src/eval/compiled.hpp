@@ -60,6 +60,7 @@ enum class node_kind {
     ninej,
     delta,
     triangle,
+    projection,
     sum
 };
 

@@ -63,6 +63,10 @@ public:
                 auto a = self().twice(n.forms[0]), b = self().twice(n.forms[1]), c = self().twice(n.forms[2]);
                 return a && b && c && exact::triangle(*a, *b, *c) ? exact::number(1L) : exact::number();
             }
+            case node_kind::projection: {
+                auto j = self().twice(n.forms[0]), m = self().twice(n.forms[1]);
+                return j && m && exact::projection_ok(*j, *m) ? exact::number(1L) : exact::number();
+            }
             case node_kind::sum:
                 return self().sum(n);
             default:

@@ -38,6 +38,9 @@ void add_structure(const ex& f, coupling_structure& out) {
         case symbol_kind::delta:
             out.zeros.push_back(f.op(0) - f.op(1));
             return;
+        case symbol_kind::projection:
+            out.projections.emplace_back(f.op(0), f.op(1));
+            return;
         default:
             return;
     }

@@ -88,6 +88,12 @@ ex triangle_eval(const ex& a, const ex& b, const ex& c) {
     return triangle(a, b, c).hold();
 }
 
+ex projection_of_eval(const ex& j, const ex& m) {
+    if (is_num(j) && is_num(m))
+        return numeric_projection_fails(j, m) || num(j).is_negative() || !(2 * num(j)).is_integer() ? 0 : 1;
+    return projection_of(j, m).hold();
+}
+
 }  // namespace
 
 REGISTER_FUNCTION(wigner3j, eval_func(wigner3j_eval))
@@ -96,6 +102,7 @@ REGISTER_FUNCTION(wigner9j, eval_func(wigner9j_eval))
 REGISTER_FUNCTION(clebsch, eval_func(clebsch_eval))
 REGISTER_FUNCTION(kdelta, eval_func(kdelta_eval))
 REGISTER_FUNCTION(triangle, eval_func(triangle_eval))
+REGISTER_FUNCTION(projection_of, eval_func(projection_of_eval))
 
 symbol_kind kind_of(const ex& e) {
     if (!is_a<function>(e)) return symbol_kind::none;
@@ -106,6 +113,7 @@ symbol_kind kind_of(const ex& e) {
     if (s == clebsch_SERIAL::serial) return symbol_kind::clebsch_gordan;
     if (s == kdelta_SERIAL::serial) return symbol_kind::delta;
     if (s == triangle_SERIAL::serial) return symbol_kind::triangle;
+    if (s == projection_of_SERIAL::serial) return symbol_kind::projection;
     return symbol_kind::none;
 }
 

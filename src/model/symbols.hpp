@@ -18,8 +18,11 @@ DECLARE_FUNCTION_6P(clebsch)
 DECLARE_FUNCTION_2P(kdelta)
 // tri(a, b, c): 1 when (a, b, c) satisfy the triangle condition with a+b+c integer, else 0
 DECLARE_FUNCTION_3P(triangle)
+// proj(j, m): 1 when m is one of the projections -j, ..., j of j, else 0.  An answer carries it
+// where a projection's column is gone but a phase still needs to know whose projection it is.
+DECLARE_FUNCTION_2P(projection_of)
 
-enum class symbol_kind { threej, sixj, ninej, clebsch_gordan, delta, triangle, none };
+enum class symbol_kind { threej, sixj, ninej, clebsch_gordan, delta, triangle, projection, none };
 // Which of our functions e is, if any.
 symbol_kind kind_of(const GiNaC::ex& e);
 

@@ -336,7 +336,13 @@ private:
             return triangle(slot(c.args[0], qn_role::angular), slot(c.args[1], qn_role::angular),
                             slot(c.args[2], qn_role::angular));
         }
-        throw user_error(c.function.offset, "unknown function '" + f + "'; the functions are sqrt, delta and tri");
+        if (f == "proj") {
+            need(2);
+            const ex j = slot(c.args[0], qn_role::angular);
+            return projection_of(j, projection_slot(c.args[1], j));
+        }
+        throw user_error(c.function.offset,
+                         "unknown function '" + f + "'; the functions are sqrt, delta, tri and proj");
     }
 
     ex node(const ast::bracket_symbol& b) {

@@ -99,6 +99,10 @@ protected:
                 return {
                     "\\{" + write(f.op(0)).text + "\\, " + write(f.op(1)).text + "\\, " + write(f.op(2)).text + "\\}",
                     level::atom};
+            // The range condition the trade leaves implicit, written out where nothing else in
+            // the formula imposes it: [|m| <= j], an Iverson bracket (j - m is an integer too).
+            case symbol_kind::projection:
+                return {"[\\,|" + write(f.op(1)).text + "| \\le " + write(f.op(0)).text + "\\,]", level::atom};
             default:
                 break;
         }

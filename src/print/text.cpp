@@ -46,6 +46,8 @@ protected:
                 return {"delta" + rows(f, "(", ")", 2), level::atom};
             case symbol_kind::triangle:
                 return {"tri" + rows(f, "(", ")", 3), level::atom};
+            case symbol_kind::projection:
+                return {"proj" + rows(f, "(", ")", 2), level::atom};
             default:
                 break;
         }

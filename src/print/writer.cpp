@@ -22,6 +22,7 @@ int factor_rank(const ex& f) {
     switch (kind_of(f)) {
         case symbol_kind::delta:
         case symbol_kind::triangle:
+        case symbol_kind::projection:
             return 2;
         case symbol_kind::clebsch_gordan:
             return 3;

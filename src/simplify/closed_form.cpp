@@ -6,6 +6,7 @@
 
 #include "canonical/symmetries.hpp"
 #include "model/rewrite.hpp"
+#include "model/same_value.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
 
@@ -237,6 +238,13 @@ ex drop_in_product(const ex& term) {
                             [&](const std::array<ex, 3>& s) { return same_triad(t, s); }))
                 continue;
         }
+        // proj(j, m) beside a column (j, +-m) says nothing the column does not.
+        if (kind_of(b) == symbol_kind::projection &&
+            std::any_of(imposed.projections.begin(), imposed.projections.end(), [&](const auto& c) {
+                return same_value(c.first, b.op(0)) &&
+                       (same_value(c.second, b.op(1)) || same_value(c.second, -b.op(1)));
+            }))
+            continue;
         out *= f;
     }
     return out;
