@@ -30,7 +30,8 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
 
 Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
 collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product
-imposes it, proj(j, m) only where a phase holds m and no column does; never more sums (then symbols, then terms) than the input in canonical form.
+imposes it, proj(j, m) only where a phase holds m and no column does; never more sums
+(then symbols, then terms) than the input in canonical form.
 
 Checks and simplifications are verified by exact evaluation at every admissible point with
 all free j <= --depth (default 2; at most 4000 points, chosen at random beyond that)

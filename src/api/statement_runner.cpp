@@ -9,7 +9,6 @@
 #include "model/normalize.hpp"
 #include "print/print.hpp"
 #include "simplify/closed_form.hpp"
-#include "simplify/projection_owners.hpp"
 #include "simplify/simplify.hpp"
 #include "verify/check_summary.hpp"
 #include "verify/simplification_check.hpp"
@@ -56,7 +55,6 @@ simplification run_simplifier(const statement_context& c) {
         const ex rearranged = merge_phases(in_written_arrangement(result, e));
         if (!rearranged.is_equal(result)) result = merge_phases(reduce_phases(rearranged, c.numbers));
     }
-    result = with_projection_owners(result, c.numbers);
     return done;
 }
 

@@ -17,12 +17,15 @@ bool is_num(const ex& e) { return is_a<numeric>(e); }
 numeric num(const ex& e) { return ex_to<numeric>(e); }
 
 // Known-false numeric selection rules make the symbol 0; anything symbolic is kept.
+// Not one of 0, 1/2, 1, ...: no angular momentum.
+bool numeric_angular_fails(const numeric& v) { return v.is_negative() || !(2 * v).is_integer(); }
+
 bool numeric_triangle_fails(const ex& a, const ex& b, const ex& c) {
     if (!is_num(a) || !is_num(b) || !is_num(c)) return false;
     numeric x = num(a), y = num(b), z = num(c);
     if (!(x + y + z).is_integer()) return true;
     for (const numeric& v : {x, y, z})
-        if (v.is_negative() || !(2 * v).is_integer()) return true;
+        if (numeric_angular_fails(v)) return true;
     return z < abs(x - y) || z > x + y;
 }
 
@@ -89,8 +92,7 @@ ex triangle_eval(const ex& a, const ex& b, const ex& c) {
 }
 
 ex projection_of_eval(const ex& j, const ex& m) {
-    if (is_num(j) && is_num(m))
-        return numeric_projection_fails(j, m) || num(j).is_negative() || !(2 * num(j)).is_integer() ? 0 : 1;
+    if (is_num(j) && is_num(m)) return numeric_projection_fails(j, m) || numeric_angular_fails(num(j)) ? 0 : 1;
     return projection_of(j, m).hold();
 }
 

@@ -12,10 +12,11 @@ using namespace GiNaC;
 
 namespace {
 
-bool in_some_phase(const ex& term, const symbol& m) {
-    for (const_preorder_iterator it = term.preorder_begin(); it != term.preorder_end(); ++it)
-        if (is_a<phase_factor>(*it) && ex_to<phase_factor>(*it).exponent().has(m)) return true;
-    return false;
+// m free (not bound by an enclosing sum over it) in the exponent of some phase of e.
+bool in_some_phase(const ex& e, const symbol& m) {
+    if (is_a<phase_factor>(e)) return ex_to<phase_factor>(e).exponent().has(m);
+    if (is_a<index_sum>(e) && ex_to<index_sum>(e).indices().has(m)) return false;
+    return std::any_of(e.begin(), e.end(), [&](const ex& child) { return in_some_phase(child, m); });
 }
 
 bool has_column(const std::vector<projection_column>& columns, const symbol& m) {

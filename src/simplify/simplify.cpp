@@ -14,6 +14,7 @@
 #include "simplify/closed_form.hpp"
 #include "simplify/frozen_weights.hpp"
 #include "simplify/nest_sums.hpp"
+#include "simplify/projection_owners.hpp"
 #include "simplify/stage_identities.hpp"
 
 namespace couplet {
@@ -87,7 +88,10 @@ simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& nu
     x = jsums.value;
     steps_taken.insert(steps_taken.end(), jsums.trace.begin(), jsums.trace.end());
     x = merge_phases(x);
-    const ex closed = closed_form(x);
+    // The owners of projections in phases are part of the closed form: without them the answer
+    // cannot be read back (projection_owners.hpp).  Owners as this input pairs them, so that
+    // proj(j, m) is 1 wherever the input is defined.
+    const ex closed = with_projection_owners(closed_form(x), numbers.for_statement(e));
     if (!closed.is_equal(x)) steps_taken.push_back(step_by(closed_form_identity(), x, closed, true));
     x = closed;
     // Counted on the input as canonicalized at the start (its phases do not change the counts);
