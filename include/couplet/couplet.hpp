@@ -76,10 +76,21 @@ struct step {
     GiNaC::ex before, after;
 };
 
+// How far sampled points reached: the largest j evaluated, and how many of the values
+// 0, 1/2, ..., values_up_to of the free angular momenta were taken at a point where the
+// expression is nonzero (each j on its own; values its parity or its triads exclude are not
+// counted).
+struct reach {
+    std::string largest_j;  // "189/2"; empty when no free angular momentum was evaluated
+    int values_up_to = 0;
+    std::size_t values_covered = 0, values_wanted = 0;
+};
+
 // How simplify's answer was checked against its input by exact evaluation.
 struct verification {
     bool attempted = false, verified = false;
     std::size_t points = 0, nonzero_points = 0, points_sampled = 0;
+    reach reached;
     std::string disagreement;  // where and how the answer differed, when it did
 };
 
@@ -103,7 +114,10 @@ struct check_record {
     std::string summary;  // one line: "holds: ...", "fails by a phase: ..."
     bool proved_symbolically = false;
     std::size_t points = 0, nonzero_points = 0;
-    bool exhaustive = true;  // every admissible point with j <= depth was checked
+    std::size_t undefined_points = 0;  // admissible points where a side divides by 0 (not counted)
+    bool exhaustive = true;            // every admissible point with j <= depth was checked
+    bool every_point = false;          // the admissible points are finitely many, all checked
+    reach reached;
     int depth = 2;
     std::optional<GiNaC::ex> missing_phase;   // exponent E: the right side lacks (-1)^E
     std::optional<GiNaC::ex> missing_factor;  // the whole factor the right side lacks

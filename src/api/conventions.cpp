@@ -1,3 +1,4 @@
+#include <chrono>
 #include <sstream>
 
 #include "couplet/couplet.hpp"
@@ -5,6 +6,8 @@
 #include "limits/run_limits.hpp"
 #include "parse/lower.hpp"
 #include "parse/parse.hpp"
+#include "verify/identity_check.hpp"
+#include "verify/sampler.hpp"
 
 namespace couplet {
 
@@ -33,13 +36,30 @@ collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same 
 imposes it, proj(j, m) only where a phase holds m and no column does; never more sums
 (then symbols, then terms) than the input in canonical form.
 
-Checks and simplifications are verified by exact evaluation at every admissible point with
-all free j <= --depth (default 2; at most 4000 points, chosen at random beyond that)
-and at --samples random points with larger j (default 200).  At default settings simplify
-checks fresh points of these kinds for about as long as the simplification took (at least
-12 points); give --depth or --samples to check them all.
-
 )";
+
+// How points are sampled, written from the sampler's defaults.
+std::string verification_text() {
+    verify::sampling_options o;
+    std::ostringstream os;
+    os << "Checks and simplifications are verified by exact evaluation at every admissible point with\n"
+       << "all free j <= --depth (default " << o.depth << "; at most " << o.exhaustive_limit
+       << " points, chosen at random beyond that),\n"
+       << "at --samples random points with j <= depth + 4 (default " << o.samples << "), at " << o.far_points
+       << " random points with j up\n"
+       << "to " << o.far_max_j << ", and, for each value 0, 1/2, ..., " << o.cover_max_j
+       << " of each free j, at a point where the expression\n"
+       << "is nonzero where one is found (a point costing more than " << o.far_work << " summands is skipped; this\n"
+       << "search stops after " << std::chrono::duration<double>(o.reach_time).count()
+       << " s).  check says \"holds\" from a symbolic proof, from every admissible\n"
+       << "point where they are finitely many, or from at least " << verify::minimum_evidence
+       << " points with a nonzero side;\n"
+       << "otherwise \"undecided\" (exit status 4).  Its verdict says how far the points reached (the\n"
+       << "largest j, and how many values of the free j were seen at a nonzero point).  At default\n"
+       << "settings simplify checks fresh points of these kinds for about as long as the\n"
+       << "simplification took (at least 12 points); give --depth or --samples to check them all.\n\n";
+    return os.str();
+}
 
 // Written from the constants themselves, so the help cannot drift from what is enforced.
 std::string bounds_text() {
@@ -60,6 +80,6 @@ std::string bounds_text() {
 
 }  // namespace
 
-std::string conventions_text() { return conventions_text_head + bounds_text(); }
+std::string conventions_text() { return conventions_text_head + verification_text() + bounds_text(); }
 
 }  // namespace couplet

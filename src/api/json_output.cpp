@@ -45,6 +45,13 @@ json counterexample_json(const counterexample& c) {
     return {{"at", at}, {"assignment", c.assignment}, {"lhs", c.lhs.exact}, {"rhs", c.rhs.exact}};
 }
 
+json reach_json(const reach& r) {
+    return {{"largest_j", r.largest_j.empty() ? json() : json(r.largest_j)},
+            {"values_up_to", r.values_up_to},
+            {"values_covered", r.values_covered},
+            {"values_wanted", r.values_wanted}};
+}
+
 json check_json(const check_record& r) {
     json j;
     j["holds"] = r.result == verdict::undecided ? json() : json(r.result == verdict::holds);
@@ -53,7 +60,10 @@ json check_json(const check_record& r) {
     j["missing_factor"] = r.missing_factor ? json(to_text(*r.missing_factor)) : json();
     j["points"] = r.points;
     j["nonzero_points"] = r.nonzero_points;
+    j["undefined_points"] = r.undefined_points;
+    j["reach"] = reach_json(r.reached);
     j["symbolic_proof"] = r.proved_symbolically;
+    j["every_admissible_point"] = r.every_point;
     j["depth"] = r.depth;
     j["exhaustive"] = r.exhaustive;
     j["counterexample"] = r.result != verdict::holds && r.counter ? counterexample_json(*r.counter) : json();
@@ -73,6 +83,7 @@ json simplify_json(const result& r) {
     if (r.checked.verified) {
         j["nonzero_points"] = r.checked.nonzero_points;
         j["points_sampled"] = r.checked.points_sampled;
+        j["reach"] = reach_json(r.checked.reached);
     }
     if (!r.checked.disagreement.empty()) j["internal_error"] = r.checked.disagreement;
     if (r.steps) {

@@ -189,14 +189,22 @@ void latex_document::check(const result& res) {
     switch (r.result) {
         case verdict::holds:
             f.relations = {"="};
-            f.notes = {"\\quad" + words(r.points == 0 ? "(holds vacuously: no admissible point)"
-                                        : r.proved_symbolically
-                                            ? "(proved; checked exactly at " + points.str() + " points)"
-                                            : "(verified exactly at " + points.str() + " points)")};
+            f.notes = {"\\quad" +
+                       words(r.points == 0           ? "(holds vacuously: no admissible point)"
+                             : r.proved_symbolically ? "(proved; checked exactly at " + points.str() + " points)"
+                             : r.every_point         ? "(checked exactly at every admissible point)"
+                                                     : "(sampled, not proved: " + points.str() + " points, " +
+                                                   std::to_string(r.nonzero_points) + " nonzero" +
+                                                   (r.reached.largest_j.empty() ? std::string()
+                                                                                : ", j up to " + r.reached.largest_j) +
+                                                   ")")};
             break;
         case verdict::undecided:
             f.relations = {"\\overset{?}{=}"};
-            f.notes = {"\\quad" + words("(undecided: stopped by the time limit after " + points.str() + " points)")};
+            f.notes = {"\\quad" + words(r.stopped
+                                            ? "(undecided: stopped by the time limit after " + points.str() + " points)"
+                                            : "(undecided: only " + std::to_string(r.nonzero_points) + " of " +
+                                                  points.str() + " points nonzero)")};
             break;
         case verdict::fails_by_phase:
             f.relations = {"\\neq"};

@@ -1,6 +1,7 @@
 #include "api/statement_runner.hpp"
 
 #include <chrono>
+#include <sstream>
 
 #include "canonical/phase_reduction.hpp"
 #include "canonical/symmetries.hpp"
@@ -72,6 +73,19 @@ std::vector<step> readable_steps(const std::vector<simplification_step>& steps, 
     return out;
 }
 
+reach public_reach(const verify::reach_summary& r) {
+    reach out;
+    if (r.largest_twice_j >= 0) {
+        std::ostringstream os;
+        os << GiNaC::numeric(r.largest_twice_j, 2);
+        out.largest_j = os.str();
+    }
+    out.values_up_to = r.cover_max_j;
+    out.values_covered = r.covered;
+    out.values_wanted = r.wanted;
+    return out;
+}
+
 // A result is returned only once it agrees with the input at every sample point; a
 // disagreement is couplet's own bug, so the input is shown unsimplified and marked.
 result simplify(const statement_context& c) {
@@ -87,6 +101,8 @@ result simplify(const statement_context& c) {
     verify::simplification_check v;
     try {
         v = verify::verify_simplification(c.s.value, r.answer, c.numbers, sampling_of(c.o), c.o.progress, budget);
+    } catch (const division_by_zero& e) {
+        throw user_error(c.s.span.begin, std::string("the input is undefined: ") + e.what());
     } catch (const evaluation_error& e) {
         throw user_error(c.s.span.begin, std::string("cannot verify the simplification: ") + e.what() +
                                              " (--no-verify prints it unverified)");
@@ -97,6 +113,7 @@ result simplify(const statement_context& c) {
         r.checked.verified = true;
         r.checked.nonzero_points = v.nonzero;
         r.checked.points_sampled = v.sampled;
+        r.checked.reached = public_reach(v.reach);
         return r;
     }
     r.checked.disagreement = !v.result_error.empty()
@@ -148,6 +165,9 @@ check_record public_record(const verify::check_report& r) {
     out.proved_symbolically = r.proved_symbolically;
     out.points = r.points;
     out.nonzero_points = r.nonzero;
+    out.undefined_points = r.undefined;
+    out.every_point = r.finite;
+    out.reached = public_reach(r.reach);
     out.exhaustive = r.complete;
     out.depth = r.depth;
     out.missing_phase = r.missing_phase;

@@ -26,7 +26,9 @@ others still run (a let that cannot be read leaves its name without a value); on
 bracket or nesting beyond the bound stops the whole input.
 Exit status: 0 done (every check holds), 1 a check fails, 2 bad input, a refused request or
 output that could not be written, 3 an internal check failed (a simplification changed the
-value; the input is printed as is); the highest that applies.)";
+value; the input is printed as is), 4 a check undecided (no symbolic proof and fewer than 12
+points with a nonzero side, or stopped by --time-limit); where several apply, the first of
+3, 2, 1, 4.)";
 
 std::string help_footer() { return couplet::conventions_text() + exit_status_text; }
 
@@ -51,7 +53,7 @@ void add_common_options(CLI::App& sub, request& r) {
     sub.add_option("--format", r.format, "Output format")->check(CLI::IsMember({"text", "latex", "json"}));
     sub.add_option("--depth", r.depth, "Check exactly at every admissible point with all free j <= DEPTH (default 2)")
         ->check(CLI::Range(0, 6));
-    sub.add_option("--samples", r.samples, "Also check at N random points with larger j (default 200)")
+    sub.add_option("--samples", r.samples, "Also check at N random points with j <= DEPTH + 4 (default 200)")
         ->check(CLI::Range(0, 100000));
     sub.add_flag("--no-verify", r.no_verify, "Print simplifications without checking them against the input");
     sub.add_option("--prefer", r.prefer, "Write results with 3j symbols (default) or Clebsch-Gordan coefficients")
@@ -169,12 +171,13 @@ int run_input(const request& r, const std::string& name, const std::string& text
             meter.emplace(err);
             o.progress = meter->callback();
         }
-        bool any_failed = false, any_internal = false, any_error = false;
+        bool any_failed = false, any_internal = false, any_error = false, any_undecided = false;
         output.begin(input);
         auto each = [&](const result& res) {
             output.write(res);
             if (!res.diagnostic.empty()) err << res.diagnostic;
             any_failed = any_failed || res.failed();
+            any_undecided = any_undecided || (res.check && res.check->result == verdict::undecided);
             any_internal = any_internal || res.internal_failure;
         };
         // A statement that cannot be carried out is reported where it stands; the others run.
@@ -186,7 +189,11 @@ int run_input(const request& r, const std::string& name, const std::string& text
         run_all(input, o, each, r.command == "eval" ? bare_meaning::eval : bare_meaning::simplify, failed);
         output.end();
         if (!out) return output_lost(err);
-        return any_internal ? internal_failure : any_error ? bad_input : any_failed ? check_false : ok;
+        return any_internal    ? internal_failure
+               : any_error     ? bad_input
+               : any_failed    ? check_false
+               : any_undecided ? check_undecided
+                               : ok;
     } catch (const input_error& e) {
         err << e.diagnostic();
         output.error(e);

@@ -24,6 +24,22 @@ public:
     using std::runtime_error::runtime_error;
 };
 
+// A divisor is 0 at the point: the expression is undefined there, which a verification counts
+// as a point where the identity says nothing rather than as a failure.
+class division_by_zero : public evaluation_error {
+public:
+    explicit division_by_zero(const std::string& divisor_text, const std::string& where = "here")
+        : evaluation_error("division by zero: the divisor of " + divisor_text + " is 0 " + where),
+          divisor(divisor_text) {}
+    std::string divisor;  // the expression that divides, as written
+};
+
+// The point needs more summands than evaluation_limits::max_sum_terms allows.
+class work_limit_exceeded : public evaluation_error {
+public:
+    using evaluation_error::evaluation_error;
+};
+
 // How a sum's indices are enumerated.  Both give the same exact value.  `propagating` binds
 // the indices in an order fixed at compile time, solves an index from an equality (m3 = -m1 - m2
 // of a 3j) instead of looping over it, checks each selection rule and evaluates each factor

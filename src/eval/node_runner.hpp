@@ -29,16 +29,19 @@ public:
                 return s;
             }
             case node_kind::mul: {
+                // A vanishing factor ends the product, but a divisor of 0 still makes it
+                // undefined: which one GiNaC lists first must not decide the value.
                 exact::number s(1L);
-                for (const auto& c : n.children) {
-                    s *= run(*c);
-                    if (s.is_zero()) break;
-                }
+                for (const auto& c : n.children)
+                    if (!s.is_zero())
+                        s *= run(*c);
+                    else if (divides(*c))
+                        run(*c);
                 return s;
             }
             case node_kind::power: {
                 exact::number base = run(*n.children[0]);
-                if (n.exponent < 0 && base.is_zero()) throw division_by_zero(n);
+                if (n.exponent < 0 && base.is_zero()) throw zero_divisor(n);
                 return exact::power(base, n.exponent);
             }
             case node_kind::root_power: {
@@ -46,7 +49,7 @@ public:
                 if (!base.is_rational() || cln::minusp(base.rational_value()))
                     throw evaluation_error("sqrt of " + base.to_string() + " (in " + n.text +
                                            ") is not a real square root of a rational");
-                if (n.exponent < 0 && base.is_zero()) throw division_by_zero(n);
+                if (n.exponent < 0 && base.is_zero()) throw zero_divisor(n);
                 exact::number root;
                 try {
                     root = exact::number::sqrt_of(base.rational_value());
@@ -83,18 +86,20 @@ protected:
         const long before = terms_;
         terms_ += terms;
         if (terms_ > max_terms_)
-            throw evaluation_error(what + " need more than " + std::to_string(max_terms_) + " terms at this point");
+            throw work_limit_exceeded(what + " need more than " + std::to_string(max_terms_) + " terms at this point");
         if (terms_ / 64 != before / 64) check_deadline();  // --time-limit reaches into long sums
     }
 
 private:
     Values& self() { return static_cast<Values&>(*this); }
 
+    static bool divides(const node& n) {
+        return (n.kind == node_kind::power || n.kind == node_kind::root_power) && n.exponent < 0;
+    }
+
     // Every division reaches here as a negative power, so this one error covers 1/x, x^-1,
     // 1/sum(...) and roots of them, whatever the divisor is: a symbol, a sum or a name.
-    static evaluation_error division_by_zero(const node& n) {
-        return evaluation_error("division by zero: the divisor of " + n.text + " is 0 here");
-    }
+    static division_by_zero zero_divisor(const node& n) { return division_by_zero(n.text); }
 
     exact::number coupling_symbol(const node& n) {
         symbol_memo::key t{};

@@ -12,6 +12,7 @@
 #include "verify/domain.hpp"
 #include "verify/factor_fit.hpp"
 #include "verify/phase_fit.hpp"
+#include "verify/reach.hpp"
 #include "verify/tolerant_evaluation.hpp"
 
 namespace couplet::verify {
@@ -56,16 +57,23 @@ counterexample make_counterexample(const sampling_domain& d, const point& t, con
 // Both sides at every point, in order, stopping once no diagnosis can survive.
 class comparison {
 public:
-    comparison(const sampling_domain& d, const tolerant_expression& lhs, const tolerant_expression& rhs)
-        : d_(d), lhs_(lhs), rhs_(rhs) {}
+    comparison(const sampling_domain& d, const tolerant_expression& lhs, const tolerant_expression& rhs,
+               const tolerant_expression& bounded_lhs, const tolerant_expression& bounded_rhs, reach_tracker& reach)
+        : d_(d), lhs_(lhs), rhs_(rhs), bounded_lhs_(bounded_lhs), bounded_rhs_(bounded_rhs), reach_(reach) {}
 
-    void run(const std::vector<point>& points, const progress_callback& progress) {
+    // False once the comparison has stopped (no diagnosis can survive).
+    bool run(const std::vector<point>& points, const progress_callback& progress) {
         for (std::size_t i = 0; i < points.size(); ++i) {
             if (progress) progress(i, points.size());
             check_deadline();
-            if (!observe(points[i])) break;
+            if (!observe(points[i], false)) return false;
         }
         if (progress) progress(points.size(), points.size());
+        return true;
+    }
+
+    bool reach_further(const sampling_options& o) {
+        return verify::reach_further(d_, o, reach_, seen_, [this](const point& t) { return observe(t, true); });
     }
 
     bool all_equal() const { return all_equal_; }
@@ -76,18 +84,30 @@ public:
     const std::vector<exact::number>& lhs_values() const { return lhs_values_; }
     const std::optional<counterexample>& first_mismatch() const { return mismatch_; }
     bool one_side_vanishes() const { return one_side_vanishes_; }
+    std::size_t undefined() const { return undefined_; }
+    const std::string& first_undefined() const { return first_undefined_; }
     std::vector<detail::factor_candidate>& candidates() { return candidates_; }
 
 private:
-    bool observe(const point& t) {
+    // `bounded`: a point of reach, skipped where it would cost more than far_work summands.
+    bool observe(const point& t, bool bounded) {
         assignment at = to_assignment(d_, t);
         exact::number l, r;
         try {
-            l = lhs_.at(at);
-            r = rhs_.at(at);
+            l = (bounded ? bounded_lhs_ : lhs_).at(at);
+            r = (bounded ? bounded_rhs_ : rhs_).at(at);
+        } catch (const division_by_zero& e) {
+            if (undefined_++ == 0) first_undefined_ = e.divisor;
+            return true;  // a side is undefined here: the identity says nothing at this point
+        } catch (const work_limit_exceeded&) {
+            if (!bounded) throw;
+            ++too_costly_;
+            return true;
         } catch (const std::domain_error&) {
-            return true;  // a side divides by zero here: the identity says nothing at this point
+            ++undefined_;
+            return true;
         }
+        reach_.record(t, !(l.is_zero() && r.is_zero()));
         seen_.push_back(t);
         lhs_values_.push_back(l);
         rhs_values_.push_back(r);
@@ -129,6 +149,11 @@ private:
     const sampling_domain& d_;
     const tolerant_expression& lhs_;
     const tolerant_expression& rhs_;
+    const tolerant_expression& bounded_lhs_;
+    const tolerant_expression& bounded_rhs_;
+    reach_tracker& reach_;
+    std::size_t undefined_ = 0, too_costly_ = 0;
+    std::string first_undefined_;
     bool all_equal_ = true;
     bool one_side_vanishes_ = false;
     std::size_t nonzero_ = 0;
@@ -172,8 +197,10 @@ bool repair_holds(const ex& lhs, const ex& rhs, const ex& fix, const quantum_num
             assignment at = to_assignment(d, t);
             try {
                 if (l.at(at) != r.at(at)) return false;
-            } catch (const std::domain_error&) {
+            } catch (const division_by_zero&) {
                 continue;  // undefined here, as in the comparison
+            } catch (const std::domain_error&) {
+                continue;
             }
         }
     } catch (const evaluation_error&) {
@@ -203,15 +230,26 @@ check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers&
     sampling_domain d = build_domain({lhs, rhs}, numbers);
     sample_set samples = sample_points(d, options.sampling);
     report.complete = samples.complete;
+    report.finite = samples.finite;
     tolerant_expression left(lhs, numbers), right(rhs, numbers);
-    comparison cmp(d, left, right);
+    evaluation_limits bounded;
+    bounded.max_sum_terms = options.sampling.far_work;
+    tolerant_expression far_left(lhs, numbers, bounded), far_right(rhs, numbers, bounded);
+    reach_tracker reach(d, samples.finite ? 0 : options.sampling.cover_max_j);
+    comparison cmp(d, left, right, far_left, far_right, reach);
     try {
-        cmp.run(samples.points, options.progress);
+        if (cmp.run(samples.points, options.progress) && !samples.finite) cmp.reach_further(options.sampling);
     } catch (const time_limit_reached&) {
         report.stopped = true;  // what was compared so far still stands
     }
     report.points = cmp.evaluated();
     report.nonzero = cmp.nonzero();
+    report.undefined = cmp.undefined();
+    report.reach = reach.summary();
+    if (report.points == 0 && report.undefined > 0)
+        throw division_by_zero(cmp.first_undefined(), "at every admissible point checked (" +
+                                                          std::to_string(report.undefined) +
+                                                          (report.undefined == 1 ? " point)" : " points)"));
 
     if (report.stopped) {
         report.counter = cmp.first_mismatch();
@@ -226,15 +264,24 @@ check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers&
             report.note =
                 "no assignment of the free quantum numbers is admissible (declarations, triads and "
                 "projections exclude them all), so the identity says nothing";
-        else if (report.nonzero == 0)
-            report.note = "both sides are 0 at every point checked, which proves little";
+        else if (!report.proved_symbolically && !report.finite && report.nonzero < minimum_evidence) {
+            report.result = verdict::undecided;
+            report.note =
+                "only " + std::to_string(report.nonzero) + (report.nonzero == 1 ? " point has" : " points have") +
+                " a nonzero side, and \"holds\" without a symbolic proof needs " + std::to_string(minimum_evidence);
+        }
         return report;
     }
     report.symbolic_conflict = report.proved_symbolically;
     report.counter = cmp.first_mismatch();
+    bool unconfirmed_fit = false;
     for (auto& c : cmp.candidates()) {
         auto fix = repair(c, cmp.seen(), d);
-        if (!fix || !repair_holds(lhs, rhs, fix->first, numbers, d, cmp, options)) continue;
+        if (!fix) continue;
+        if (!repair_holds(lhs, rhs, fix->first, numbers, d, cmp, options)) {
+            unconfirmed_fit = true;
+            continue;
+        }
         bool phase_only = c.shape() == detail::factor_shape::constant && c.magnitude() == exact::number(1L);
         report.result = phase_only ? verdict::fails_by_phase : verdict::fails_by_factor;
         report.missing_factor = fix->first;
@@ -245,8 +292,10 @@ check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers&
     if (cmp.one_side_vanishes())
         report.note = "one side is 0 where the other is not";
     else if (!cmp.candidates().empty() && cmp.candidates().front().alive())
-        report.note = "LHS/RHS is +-" + cmp.candidates().front().magnitude().to_string() +
-                      " at every point, but no phase (-1)^(linear form) gives those signs";
+        report.note = "LHS/RHS is +-" + cmp.candidates().front().magnitude().to_string() + " at every point, " +
+                      (unconfirmed_fit ? "and the phases that fit the points checked fail at further ones: too few "
+                                         "points to find the missing phase (raise --samples or --depth)"
+                                       : "but no phase (-1)^(linear form) gives those signs");
     return report;
 }
 

@@ -15,6 +15,7 @@
 #include "exact/number.hpp"
 #include "model/quantum.hpp"
 #include "verify/progress.hpp"
+#include "verify/reach.hpp"
 #include "verify/sampler.hpp"
 
 namespace couplet::verify {
@@ -26,7 +27,12 @@ struct counterexample {
 
 std::string describe(const counterexample& c);  // "j=1, m=-1/2"
 
-// undecided: the time limit (--time-limit) stopped the comparison before any mismatch.
+// Without a symbolic proof, "holds" needs this many points with a nonzero side (unless every
+// admissible point was checked); with fewer the verdict is undecided.
+constexpr std::size_t minimum_evidence = 12;
+
+// undecided: too few nonzero points for "holds" (minimum_evidence), or the time limit (--time-limit) stopped the
+// comparison before any mismatch.
 enum class verdict { holds, fails_by_phase, fails_by_factor, fails, undecided };
 const char* verdict_name(verdict v);  // "holds", "fails by a phase", "fails by a factor", "fails", "undecided"
 
@@ -44,9 +50,12 @@ struct check_report {
     bool proved_symbolically = false;
     // The simplifier reduced LHS - RHS to 0 but evaluation disagrees: a bug, never a verdict.
     bool symbolic_conflict = false;
-    std::size_t points = 0;   // points evaluated (where a side divides by zero not counted)
-    std::size_t nonzero = 0;  // of which some side is nonzero
-    bool complete = true;     // every selection-respecting point with j <= depth was among them
+    std::size_t points = 0;     // points evaluated (where a side divides by zero not counted)
+    std::size_t nonzero = 0;    // of which some side is nonzero
+    std::size_t undefined = 0;  // admissible points where a side divides by zero
+    bool finite = false;        // every admissible point was checked: agreement is a proof
+    reach_summary reach;        // the largest j, and the values each free j took at nonzero points
+    bool complete = true;       // every selection-respecting point with j <= depth was among them
     int depth = 2;
     std::optional<GiNaC::ex> missing_phase;   // exponent E: the right side lacks (-1)^E
     std::optional<GiNaC::ex> missing_factor;  // the whole factor the right side lacks
@@ -55,7 +64,8 @@ struct check_report {
     bool stopped = false;                     // the time limit ended the comparison early
 };
 
-// Throws evaluation_error when a side cannot be evaluated at an admissible point.
+// Throws evaluation_error when a side cannot be evaluated at an admissible point, and
+// division_by_zero when a side divides by 0 at every admissible point checked.
 check_report check_identity(const GiNaC::ex& lhs, const GiNaC::ex& rhs, const quantum_numbers& numbers,
                             const check_options& options = {});
 

@@ -3,6 +3,7 @@
 #include "limits/run_limits.hpp"
 
 #include <algorithm>
+#include <optional>
 #include <random>
 #include <set>
 
@@ -21,12 +22,15 @@ long ceil_div(long a, long b) { return -floor_div(-a, b); }
 class assigner {
 public:
     assigner(const sampling_domain& d, bool keep_selection, int max_j, int small_j)
-        : d_(d), max_j_(max_j), small_j_(small_j), attached_(d.numbers.size()) {
+        : d_(d), max_j_(max_j), small_j_(small_j), pinned_(d.numbers.size()), attached_(d.numbers.size()) {
         attach(d.hard);
         if (keep_selection) attach(d.selection);
     }
 
     std::size_t size() const { return d_.numbers.size(); }
+
+    // Variable k takes only this doubled value.
+    void pin(std::size_t k, long twice) { pinned_ = k, pinned_value_ = twice; }
 
     // The values variable k may take, given t[0..k-1].
     std::vector<long> candidates(std::size_t k, point& t) const {
@@ -85,6 +89,7 @@ private:
     }
 
     std::pair<long, long> static_range(std::size_t k) const {
+        if (k == pinned_) return {pinned_value_, pinned_value_};
         const free_number& f = d_.numbers[k];
         switch (f.role) {
             case qn_role::angular:
@@ -112,6 +117,8 @@ private:
 
     const sampling_domain& d_;
     int max_j_, small_j_;
+    std::size_t pinned_;  // size(): none
+    long pinned_value_ = 0;
     std::vector<std::vector<const rule*>> attached_;
 };
 
@@ -151,6 +158,25 @@ std::vector<point> random_points(const sampling_domain& domain, std::size_t coun
     return out;
 }
 
+std::vector<point> pinned_points(const sampling_domain& domain, std::size_t k, long twice, std::size_t count,
+                                 std::uint64_t seed, const std::vector<point>& avoid) {
+    std::mt19937_64 rng(seed);
+    std::set<point> seen(avoid.begin(), avoid.end());
+    std::vector<point> out;
+    // The others' range grows with the attempts: a triad with the pinned j needs partners of
+    // about its size, and a wider range finds the points a narrow one cannot.
+    const int base = static_cast<int>(std::max(2L, (twice + 1) / 2));
+    for (std::size_t a = 0; a < 12 * count + 12 && out.size() < count; ++a) {
+        if (a % 256 == 0) check_deadline();
+        int reach = base + static_cast<int>(a / 4);
+        assigner draw(domain, a % 12 != 11, reach, std::min(reach, 2));
+        draw.pin(k, twice);
+        point t(domain.numbers.size(), 0);
+        if (draw.draw(t, rng) && seen.insert(t).second) out.push_back(t);
+    }
+    return out;
+}
+
 std::vector<point> outside_points(const sampling_domain& domain, std::size_t count, int depth, std::uint64_t seed,
                                   const std::vector<point>& avoid) {
     std::vector<point> out;
@@ -165,8 +191,42 @@ std::vector<point> outside_points(const sampling_domain& domain, std::size_t cou
     return out;
 }
 
+namespace {
+
+// Every admissible point, where there are few: the hard rules alone bound each free number
+// (a projection of a number is bounded by |m| <= j; a j or a plain variable never is), so the
+// points found with j up to 50 and up to 100 are the same.
+std::optional<std::vector<point>> every_admissible_point(const sampling_domain& domain) {
+    for (const free_number& f : domain.numbers)
+        if (f.role != qn_role::projection) return std::nullopt;
+    constexpr long budget = 20'000;
+    auto all = [&](int max_j) {
+        std::vector<point> found;
+        assigner loose(domain, false, max_j, 0);
+        bool done = loose.enumerate(
+            [&](const point& t) {
+                found.push_back(t);
+                return true;
+            },
+            budget);
+        return done ? std::optional<std::vector<point>>(std::move(found)) : std::nullopt;
+    };
+    auto near = all(50), far = all(100);
+    if (!near || !far || near->size() != far->size()) return std::nullopt;
+    return far;
+}
+
+}  // namespace
+
 sample_set sample_points(const sampling_domain& domain, const sampling_options& options) {
     sample_set s;
+    if (auto every = every_admissible_point(domain)) {
+        s.points = std::move(*every);
+        std::sort(s.points.begin(), s.points.end(), smaller_point);
+        s.exhaustive = s.points.size();
+        s.finite = true;
+        return s;
+    }
     std::mt19937_64 rng(options.seed);
     std::vector<point> kept;
     std::size_t seen_count = 0;

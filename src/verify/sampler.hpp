@@ -3,6 +3,7 @@
 // then random points with larger j.
 #pragma once
 
+#include <chrono>
 #include <cstddef>
 #include <cstdint>
 #include <vector>
@@ -22,6 +23,16 @@ struct sampling_options {
     // sides vanish in different places is caught.
     std::size_t outside_limit = 300;
     std::uint64_t seed = 0x5eed'c0de;
+    // Reach beyond the small points: each free j is looked for at every value 0, 1/2, ...,
+    // cover_max_j at a point where the expression is nonzero, and far_points random points
+    // have j up to far_max_j.  Such a point that would cost more than far_work summands is
+    // skipped, and looking for them stops after reach_time, so reach never makes a
+    // verification unbounded (an m-sum costs (2j+1) per index summed at each point).
+    int cover_max_j = 20;
+    int far_max_j = 100;
+    std::size_t far_points = 6;
+    long far_work = 50'000;
+    std::chrono::steady_clock::duration reach_time = std::chrono::milliseconds(500);
 };
 
 using point = std::vector<long>;  // doubled values, in the domain's variable order
@@ -32,6 +43,9 @@ struct sample_set {
     std::size_t outside = 0;     // points that break a selection rule
     std::size_t random = 0;      // random larger points
     bool complete = true;        // the exhaustive pass kept every point it found
+    // The admissible points are finitely many (no free j; projections of numbers only) and
+    // `points` is every one of them: agreement there is a proof.
+    bool finite = false;
 };
 
 sample_set sample_points(const sampling_domain& domain, const sampling_options& options);
@@ -45,6 +59,12 @@ std::vector<point> random_points(const sampling_domain& domain, std::size_t coun
 // them in `avoid`.
 std::vector<point> outside_points(const sampling_domain& domain, std::size_t count, int depth, std::uint64_t seed,
                                   const std::vector<point>& avoid);
+
+// Up to `count` points with variable k at doubled value `twice`, the others drawn at random
+// with j up to about that value, keeping the selection rules where the sampler manages; none
+// of them in `avoid`.
+std::vector<point> pinned_points(const sampling_domain& domain, std::size_t k, long twice, std::size_t count,
+                                 std::uint64_t seed, const std::vector<point>& avoid);
 
 // The order in which points are checked and the smallest counterexample is chosen: by the
 // sum of |2x|, then the largest |2x|, then lexicographically.

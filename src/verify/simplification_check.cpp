@@ -8,6 +8,7 @@
 #include "eval/evaluate.hpp"
 #include "limits/run_limits.hpp"
 #include "verify/domain.hpp"
+#include "verify/reach.hpp"
 #include "verify/tolerant_evaluation.hpp"
 
 namespace couplet::verify {
@@ -42,6 +43,34 @@ std::vector<point> next_batch(const sampling_domain& d, const sampling_options& 
     return out;
 }
 
+// A time-limited run's share of reach in each round: a point for each of the next two
+// (j, value) pairs not yet seen at a nonzero point, and one point further out.
+std::vector<point> reach_batch(const sampling_domain& d, const sampling_options& o, std::uint64_t round,
+                               reach_tracker& reach, std::vector<point>& drawn) {
+    std::vector<point> out;
+    std::size_t wanted = 0;
+    for (const auto& [k, twice] : reach.missing()) {
+        if (wanted == 2) break;
+        std::vector<point> p = pinned_points(d, k, twice, 1, o.seed ^ (round * 0x9e3779b97f4a7c15ULL + twice), drawn);
+        if (p.empty()) {
+            if (pinned_points(d, k, twice, 1, o.seed, {}).empty()) reach.exclude(k, twice);
+            continue;
+        }
+        ++wanted;
+        drawn.push_back(p.front());
+        out.push_back(p.front());
+    }
+    // A point's cost grows with its j: the far point reaches further with each round, so a
+    // budget that allows only a few rounds is not spent on one point at j = 100.
+    const int far_j =
+        std::min<int>(o.far_max_j, o.depth + 4 * static_cast<int>(std::min<std::uint64_t>(round + 2, 64)));
+    for (const point& t : random_points(d, 1, far_j, o.seed + 31 * (round + 1), drawn, o.depth)) {
+        drawn.push_back(t);
+        out.push_back(t);
+    }
+    return out;
+}
+
 }  // namespace
 
 verification_budget matching_budget(std::chrono::steady_clock::duration simplification_time) {
@@ -59,35 +88,60 @@ simplification_check verify_simplification(const GiNaC::ex& input, const GiNaC::
     // is caught where its value depends on it.
     sampling_domain d = build_domain({input, result}, numbers);
     const bool limited = budget.time.count() > 0;
-    tolerant_expression before(input, numbers);
-    std::unique_ptr<tolerant_expression> after;
+    evaluation_limits bounded;
+    bounded.max_sum_terms = options.far_work;
+    // Under a time budget one point of reach must not outlast it: about five summands per
+    // microsecond of budget (a summand of a few 3j takes a fraction of a microsecond).
+    if (limited) {
+        const long micros = std::chrono::duration_cast<std::chrono::microseconds>(budget.time).count();
+        bounded.max_sum_terms = std::clamp(5 * micros, 200L, options.far_work);
+    }
+    tolerant_expression before(input, numbers), far_before(input, numbers, bounded);
+    std::unique_ptr<tolerant_expression> after, far_after;
     try {
         after = std::make_unique<tolerant_expression>(result, numbers);
+        far_after = std::make_unique<tolerant_expression>(result, numbers, bounded);
     } catch (const evaluation_error& e) {
         out.agrees = false;
         out.result_error = e.what();
         return out;
     }
-    // False once the two disagree.
-    auto agree_at = [&](const point& t) {
+    reach_tracker reach(d, options.cover_max_j);
+    std::vector<point> seen;
+    std::string undefined_divisor;
+    // False once the two disagree.  `far`: a point of reach, skipped where it costs too much.
+    auto agree_at = [&](const point& t, bool far) {
         check_deadline();
         assignment at = to_assignment(d, t);
         exact::number x, y;
         try {
-            x = before.at(at);
+            x = (far ? far_before : before).at(at);
+        } catch (const division_by_zero& e) {
+            if (out.undefined++ == 0) undefined_divisor = e.divisor;
+            return true;  // the input is undefined here; nothing to agree with
+        } catch (const work_limit_exceeded&) {
+            if (!far) throw;
+            return true;
         } catch (const std::domain_error&) {
-            return true;  // the input divides by zero here; nothing to agree with
+            ++out.undefined;
+            return true;
         }
         std::string failure;
         try {
-            y = after->at(at);
+            y = (far ? *far_after : *after).at(at);
+        } catch (const work_limit_exceeded&) {
+            if (!far) throw;
+            return true;
         } catch (const evaluation_error& e) {
             failure = e.what();
         } catch (const std::domain_error& e) {
             failure = e.what();
         }
         ++out.points;
-        if (!x.is_zero() || !y.is_zero()) ++out.nonzero;
+        const bool nonzero = !x.is_zero() || !y.is_zero();
+        if (nonzero) ++out.nonzero;
+        reach.record(t, nonzero);
+        seen.push_back(t);
         if (x == y && failure.empty()) return true;
         out.agrees = false;
         out.result_error = failure;
@@ -95,32 +149,55 @@ simplification_check verify_simplification(const GiNaC::ex& input, const GiNaC::
         return false;
     };
 
+    // The input undefined wherever it was evaluated is an error, not an agreement.
+    auto finish = [&]() {
+        out.reach = reach.summary();
+        if (out.points == 0 && out.undefined > 0)
+            throw division_by_zero(undefined_divisor, "at every admissible point checked (" +
+                                                          std::to_string(out.undefined) +
+                                                          (out.undefined == 1 ? " point)" : " points)"));
+        return out;
+    };
+
     if (limited) {
         out.complete = false;
-        std::vector<point> seen;
+        std::vector<point> drawn;
+        auto out_of_time = [&] {
+            return out.points >= budget.min_points && std::chrono::steady_clock::now() - started > budget.time;
+        };
         for (std::uint64_t round = 0;; ++round) {
-            std::vector<point> batch = next_batch(d, options, round, seen);
-            if (batch.empty()) break;  // every small point has been drawn
-            out.sampled += batch.size();
+            std::vector<point> batch = next_batch(d, options, round, drawn);
+            std::vector<point> far = reach_batch(d, options, round, reach, drawn);
+            if (batch.empty() && far.empty()) break;  // every point within reach has been drawn
+            out.sampled += batch.size() + far.size();
             for (const point& t : batch) {
-                if (out.points >= budget.min_points && std::chrono::steady_clock::now() - started > budget.time)
-                    return out;
-                if (!agree_at(t)) return out;
+                if (out_of_time()) return finish();
+                if (!agree_at(t, false)) return finish();
+            }
+            for (const point& t : far) {
+                if (out_of_time()) return finish();
+                if (!agree_at(t, true)) return finish();
             }
         }
-        return out;
+        return finish();
     }
 
     sample_set samples = sample_points(d, options);
     out.complete = samples.complete;
     out.sampled = samples.points.size();
     const std::vector<point>& order = samples.points;
-    for (std::size_t i = 0; i < order.size(); ++i) {
+    bool agreed = true;
+    for (std::size_t i = 0; i < order.size() && agreed; ++i) {
         if (progress) progress(i, order.size());
-        if (!agree_at(order[i])) break;
+        agreed = agree_at(order[i], false);
     }
     if (progress) progress(order.size(), order.size());
-    return out;
+    if (agreed && !samples.finite)
+        reach_further(d, options, reach, seen, [&](const point& t) {
+            ++out.sampled;
+            return agree_at(t, true);
+        });
+    return finish();
 }
 
 }  // namespace couplet::verify

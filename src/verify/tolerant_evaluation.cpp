@@ -5,12 +5,14 @@
 
 namespace couplet::verify {
 
-tolerant_expression::tolerant_expression(const GiNaC::ex& e, const quantum_numbers& numbers)
-    : e_(e), numbers_(numbers), whole_(e, numbers) {}
+tolerant_expression::tolerant_expression(const GiNaC::ex& e, const quantum_numbers& numbers, evaluation_limits limits)
+    : e_(e), numbers_(numbers), limits_(limits), whole_(e, numbers, limits) {}
 
 exact::number tolerant_expression::at(const assignment& values) const {
     try {
         return whole_.at(values);
+    } catch (const work_limit_exceeded&) {
+        throw;  // the parts would cost as much again
     } catch (const evaluation_error&) {
     } catch (const std::domain_error&) {
     }
@@ -19,7 +21,7 @@ exact::number tolerant_expression::at(const assignment& values) const {
 
 const compiled_expression& tolerant_expression::compiled(const GiNaC::ex& e) const {
     auto it = parts_.find(e);
-    if (it == parts_.end()) it = parts_.emplace(e, std::make_unique<compiled_expression>(e, numbers_)).first;
+    if (it == parts_.end()) it = parts_.emplace(e, std::make_unique<compiled_expression>(e, numbers_, limits_)).first;
     return *it->second;
 }
 
@@ -32,21 +34,24 @@ exact::number tolerant_expression::forgiving(const GiNaC::ex& e, const assignmen
         return total;
     }
     if (GiNaC::is_a<GiNaC::mul>(e)) {
+        // A division by 0 is never excused, so every factor is looked at.
         std::exception_ptr undefined;
         exact::number product(1L);
         for (const GiNaC::ex& factor : e) {
             try {
-                exact::number v = forgiving(factor, values);
-                if (v.is_zero()) return v;
-                product *= v;
+                product *= forgiving(factor, values);
+            } catch (const division_by_zero&) {
+                throw;
+            } catch (const work_limit_exceeded&) {
+                throw;
             } catch (const evaluation_error&) {
                 undefined = std::current_exception();
             } catch (const std::domain_error&) {
                 undefined = std::current_exception();
             }
         }
-        if (undefined) std::rethrow_exception(undefined);
-        return product;
+        if (product.is_zero() || !undefined) return product;
+        std::rethrow_exception(undefined);
     }
     return compiled(e).at(values);
 }
