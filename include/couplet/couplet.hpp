@@ -119,9 +119,25 @@ struct check_record {
     bool every_point = false;          // the admissible points are finitely many, all checked
     reach reached;
     int depth = 2;
-    std::optional<GiNaC::ex> missing_phase;   // exponent E: the right side lacks (-1)^E
+    std::optional<GiNaC::ex> missing_phase;  // exponent E: the right side lacks (-1)^E
+    // Where (-1)^E belongs when not on the whole right side: the summand of the sum over these
+    // indices, on the left or the right side.
+    struct summand_site {
+        std::vector<GiNaC::ex> indices;
+        bool on_left = true;
+        std::string text;  // "the summand of the sum over x on the left side"
+    };
+    std::optional<summand_site> phase_site;
     std::optional<GiNaC::ex> missing_factor;  // the whole factor the right side lacks
     std::optional<counterexample> counter;    // the smallest point where the sides differ
+    // A 6j written in an order its symmetries do not reach, when another order makes the
+    // identity hold.
+    struct rearrangement {
+        GiNaC::ex written, needed;
+        bool on_left = false;
+        std::string text;  // "it holds with 6j{...} in place of 6j{...} on the right side"
+    };
+    std::optional<rearrangement> arrangement;
     std::string note;
     bool stopped = false;  // the time limit ended the comparison early
 };

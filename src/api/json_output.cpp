@@ -57,6 +57,11 @@ json check_json(const check_record& r) {
     j["holds"] = r.result == verdict::undecided ? json() : json(r.result == verdict::holds);
     j["verdict"] = verdict_text(r.result);
     j["missing_phase"] = r.missing_phase ? json(verify::phase_text(*r.missing_phase)) : json();
+    j["missing_phase_site"] = r.phase_site ? json(r.phase_site->text) : json();
+    j["arrangement"] = r.arrangement ? json{{"written", to_text(r.arrangement->written)},
+                                            {"needed", to_text(r.arrangement->needed)},
+                                            {"side", r.arrangement->on_left ? "left" : "right"}}
+                                     : json();
     j["missing_factor"] = r.missing_factor ? json(to_text(*r.missing_factor)) : json();
     j["points"] = r.points;
     j["nonzero_points"] = r.nonzero_points;

@@ -173,6 +173,19 @@ void latex_document::evaluation(const result& r) {
     display(f);
 }
 
+namespace {
+
+// Where a missing phase belongs, with the summation indices in math.
+std::string site_latex(const std::optional<check_record::summand_site>& site) {
+    if (!site) return words("the right side");
+    std::string indices;
+    for (const GiNaC::ex& i : site->indices) indices += (indices.empty() ? "" : ",\\, ") + to_latex(i);
+    return words("the summand of the sum over ") + " " + indices +
+           words(site->on_left ? " on the left side" : " on the right side");
+}
+
+}  // namespace
+
 void latex_document::check(const result& res) {
     const couplet::statement& s = res.source;
     display_formula f;
@@ -208,7 +221,7 @@ void latex_document::check(const result& res) {
             break;
         case verdict::fails_by_phase:
             f.relations = {"\\neq"};
-            f.notes = {"\\quad" + words("holds after multiplying the right side by ") + " " +
+            f.notes = {"\\quad" + words("holds after multiplying ") + site_latex(r.phase_site) + words(" by ") + " " +
                        to_latex(make_phase(*r.missing_phase))};
             break;
         case verdict::fails_by_factor:
@@ -222,6 +235,10 @@ void latex_document::check(const result& res) {
                 f.notes = {"\\quad" + words("at ") + point_latex(r.counter->at),
                            "\\quad" + words("the left side is ") + r.counter->lhs.latex + words(", the right side ") +
                                r.counter->rhs.latex};
+            if (r.arrangement)
+                f.notes.push_back("\\quad" + words("it holds with ") + to_latex(r.arrangement->needed) +
+                                  words(" in place of ") + to_latex(r.arrangement->written) +
+                                  words(r.arrangement->on_left ? " on the left side" : " on the right side"));
             break;
     }
     display(f);

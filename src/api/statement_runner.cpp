@@ -171,6 +171,12 @@ check_record public_record(const verify::check_report& r) {
     out.exhaustive = r.complete;
     out.depth = r.depth;
     out.missing_phase = r.missing_phase;
+    if (r.phase_site)
+        out.phase_site =
+            check_record::summand_site{r.phase_site->indices, r.phase_site->on_left, verify::describe(*r.phase_site)};
+    if (r.rearranged)
+        out.arrangement = check_record::rearrangement{r.rearranged->written, r.rearranged->needed,
+                                                      r.rearranged->on_left, verify::describe(*r.rearranged)};
     out.missing_factor = r.missing_factor;
     if (r.counter) {
         counterexample c;

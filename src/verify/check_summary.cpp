@@ -48,8 +48,9 @@ std::string summary(const check_report& r) {
             return out;
         }
         case verdict::fails_by_phase:
-            return "fails by a phase: holds after multiplying the right side by " + phase_text(*r.missing_phase) +
-                   "; " + evidence(r);
+            return "fails by a phase: holds after multiplying " +
+                   (r.phase_site ? describe(*r.phase_site) : std::string("the right side")) + " by " +
+                   phase_text(*r.missing_phase) + "; " + evidence(r);
         case verdict::fails_by_factor:
             return "fails by a factor: holds after multiplying the right side by " + to_text(*r.missing_factor) + "; " +
                    evidence(r);

@@ -11,6 +11,7 @@
 #include "simplify/simplify.hpp"
 #include "verify/domain.hpp"
 #include "verify/factor_fit.hpp"
+#include "verify/hat_fit.hpp"
 #include "verify/phase_fit.hpp"
 #include "verify/reach.hpp"
 #include "verify/tolerant_evaluation.hpp"
@@ -85,6 +86,18 @@ public:
     const std::optional<counterexample>& first_mismatch() const { return mismatch_; }
     bool one_side_vanishes() const { return one_side_vanishes_; }
     std::size_t undefined() const { return undefined_; }
+    // LHS/RHS at each point seen (nothing where both vanish); empty where one side alone
+    // vanishes somewhere, since then no factor repairs the identity.
+    std::vector<std::optional<exact::number>> ratios() const {
+        std::vector<std::optional<exact::number>> out;
+        if (!ratios_everywhere_) return out;
+        for (std::size_t k = 0; k < seen_.size(); ++k)
+            if (lhs_values_[k].is_zero() && rhs_values_[k].is_zero())
+                out.emplace_back();
+            else
+                out.emplace_back(lhs_values_[k] / rhs_values_[k]);
+        return out;
+    }
     const std::string& first_undefined() const { return first_undefined_; }
     std::vector<detail::factor_candidate>& candidates() { return candidates_; }
 
@@ -120,13 +133,15 @@ private:
             // Diagnosis starts at the first mismatch: replay the points before it.
             candidates_ = detail::simple_factors(d_);
             for (std::size_t k = 0; k + 1 < seen_.size(); ++k) feed(seen_[k], lhs_values_[k], rhs_values_[k]);
+            mismatch_seen_ = seen_.size();
         }
         if (l != r) all_equal_ = false;
         if (mismatch_) {
             if (!vanish && (l.is_zero() || r.is_zero())) return stop();
             feed(t, l, r);
+            // Without a simple candidate, enough further points for the fit of hats.
             if (std::none_of(candidates_.begin(), candidates_.end(), [](const auto& c) { return c.alive(); }))
-                return false;
+                return seen_.size() < mismatch_seen_ + hat_fit_points;
         }
         return true;
     }
@@ -142,6 +157,7 @@ private:
 
     bool stop() {
         all_equal_ = false;
+        ratios_everywhere_ = false;
         for (auto& c : candidates_) c.kill();
         return false;
     }
@@ -152,6 +168,9 @@ private:
     const tolerant_expression& bounded_lhs_;
     const tolerant_expression& bounded_rhs_;
     reach_tracker& reach_;
+    static constexpr std::size_t hat_fit_points = 96;
+    std::size_t mismatch_seen_ = 0;
+    bool ratios_everywhere_ = true;  // no point where one side alone vanishes
     std::size_t undefined_ = 0, too_costly_ = 0;
     std::string first_undefined_;
     bool all_equal_ = true;
@@ -178,6 +197,22 @@ std::optional<std::pair<ex, std::optional<ex>>> repair(detail::factor_candidate&
     if (!fit) return std::nullopt;
     ex exponent = exponent_ex(*fit, d);
     return std::make_pair(size * c.factor() * make_phase(exponent), std::optional<ex>(exponent));
+}
+
+// A product or ratio of hats with a phase that would repair the right side, fitted over
+// every point seen.
+std::optional<std::pair<ex, std::optional<ex>>> hat_repair(const comparison& cmp, const sampling_domain& d) {
+    std::vector<std::optional<exact::number>> ratios = cmp.ratios();
+    if (ratios.empty()) return std::nullopt;
+    std::optional<hat_factor> hats = fit_hat_factor(d, cmp.seen(), ratios);
+    if (!hats) return std::nullopt;
+    ex factor = hats->factor(d);
+    if (std::find(hats->needs.begin(), hats->needs.end(), sign_need::flip) == hats->needs.end())
+        return std::make_pair(factor, std::optional<ex>());
+    std::optional<phase_exponent> fit = fit_phase(cmp.seen(), hats->needs);
+    if (!fit) return std::nullopt;
+    ex exponent = exponent_ex(*fit, d);
+    return std::make_pair(factor * make_phase(exponent), std::optional<ex>(exponent));
 }
 
 // The repaired identity LHS == RHS * fix, at the points already seen and at fresh ones.
@@ -288,7 +323,31 @@ check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers&
         report.missing_phase = fix->second;
         return report;
     }
+    if (auto fix = hat_repair(cmp, d)) {
+        if (repair_holds(lhs, rhs, fix->first, numbers, d, cmp, options)) {
+            report.result = verdict::fails_by_factor;
+            report.missing_factor = fix->first;
+            report.missing_phase = fix->second;
+            return report;
+        }
+        unconfirmed_fit = true;
+    }
+    if (!cmp.one_side_vanishes())
+        if (auto inside = find_summand_phase(lhs, rhs, numbers, d, cmp.seen(), cmp.lhs_values(), cmp.rhs_values(),
+                                             options.sampling)) {
+            report.result = verdict::fails_by_phase;
+            report.missing_phase = inside->exponent;
+            report.missing_factor = std::nullopt;
+            report.phase_site = inside->site;
+            return report;
+        }
     report.result = verdict::fails;
+    if (auto other =
+            find_arrangement(lhs, rhs, numbers, d, cmp.seen(), cmp.lhs_values(), cmp.rhs_values(), options.sampling)) {
+        report.rearranged = *other;
+        report.note = describe(*other);
+        return report;
+    }
     if (cmp.one_side_vanishes())
         report.note = "one side is 0 where the other is not";
     else if (!cmp.candidates().empty() && cmp.candidates().front().alive())

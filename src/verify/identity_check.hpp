@@ -14,9 +14,11 @@
 
 #include "exact/number.hpp"
 #include "model/quantum.hpp"
+#include "verify/arrangement_fit.hpp"
 #include "verify/progress.hpp"
 #include "verify/reach.hpp"
 #include "verify/sampler.hpp"
+#include "verify/summand_phase.hpp"
 
 namespace couplet::verify {
 
@@ -58,6 +60,8 @@ struct check_report {
     bool complete = true;       // every selection-respecting point with j <= depth was among them
     int depth = 2;
     std::optional<GiNaC::ex> missing_phase;   // exponent E: the right side lacks (-1)^E
+    std::optional<summand_site> phase_site;   // where (-1)^E belongs, when not on the whole right side
+    std::optional<arrangement> rearranged;    // a 6j in an order that makes the identity hold
     std::optional<GiNaC::ex> missing_factor;  // the whole factor the right side lacks
     std::optional<counterexample> counter;    // the smallest point where the sides differ
     std::string note;                         // a hint for a plain failure, or a caveat
