@@ -64,17 +64,18 @@ void require_missing(const std::string& identity, const std::string& expected) {
 
 }  // namespace
 
-TEST_CASE("a product of two hats is found as one missing factor", "[verify][diagnosis]") {
+TEST_CASE("a product of two hats is found as one missing factor", "[verify][diagnosis][slow]") {
     // Edmonds 6.1.5 with both hats left out: the factor is sqrt((2 j12+1)(2 j23+1)).
     require_missing(recoupling_sum + " == (-1)^(j1+j2+j3+J) * " + sixj, "sqrt((2*j12+1)*(2*j23+1))");
 }
 
-TEST_CASE("(2 j12+1) written where sqrt((2 j12+1)(2 j23+1)) belongs is found as their ratio", "[verify][diagnosis]") {
+TEST_CASE("(2 j12+1) written where sqrt((2 j12+1)(2 j23+1)) belongs is found as their ratio",
+          "[verify][diagnosis][slow]") {
     // Edmonds 6.1.5: the repair is sqrt((2 j12+1)(2 j23+1)) / (2 j12+1).
     require_missing(recoupling_sum + " == (-1)^(j1+j2+j3+J) * (2*j12+1) * " + sixj, "sqrt((2*j23+1)/(2*j12+1))");
 }
 
-TEST_CASE("a phase and wrong hats together are found together", "[verify][diagnosis]") {
+TEST_CASE("a phase and wrong hats together are found together", "[verify][diagnosis][slow]") {
     // Edmonds 6.1.5 with the phase and both hats left out.
     require_missing(recoupling_sum + " == " + sixj, "(-1)^(j1+j2+j3+J) * sqrt((2*j12+1)*(2*j23+1))");
     // DLMF 34.1.1 read backwards, with 1/sqrt(2 j3+1) and the phase left out.

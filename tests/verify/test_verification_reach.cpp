@@ -3,6 +3,7 @@
 // where a divisor is 0 counted as undefined, never as 0.
 #include <catch2/catch.hpp>
 
+#include <chrono>
 #include <random>
 #include <string>
 #include <vector>
@@ -11,6 +12,11 @@
 #include "support.hpp"
 
 using couplet::testing::check_text;
+
+namespace {
+// Enough time for every covering point, so that load on the machine cannot change an outcome.
+constexpr std::chrono::milliseconds unhurried{120'000};
+}  // namespace
 using couplet::testing::run_cli;
 using couplet::verify::verdict;
 
@@ -27,23 +33,34 @@ bool caught(verdict v) { return v != verdict::holds && v != verdict::undecided; 
 
 TEST_CASE("a 6j identity wrong only at a = 7 is caught at default settings", "[verify][reach]") {
     // DLMF 34.5.8 (column permutation) times 1 + delta(a, 7): false exactly at a = 7.
-    auto c = check_text(spoiled_at("6j{a, b, c; d, e, f} == 6j{b, a, c; e, d, f}", "a", "7"));
+    auto c = check_text(spoiled_at("6j{a, b, c; d, e, f} == 6j{b, a, c; e, d, f}", "a", "7"), 2, 200, unhurried);
     REQUIRE(caught(c.report.result));
     REQUIRE(c.report.counter);
     CHECK(c.report.counter->at.front().first == "a");
     CHECK(c.report.counter->at.front().second == 7);
 }
 
-TEST_CASE("the recoupling coefficient of three j with a factor wrong only at J = 7 is caught", "[verify][reach]") {
+TEST_CASE("a one-j identity wrong only at j = 8 is caught, whatever --samples says", "[verify][reach]") {
+    // DLMF 34.3.1 times 1 + delta(j, 8).  One free j (and its m) once gave 7 points, j = 0..6.
+    for (int samples : {0, 200, 5000}) {
+        INFO("samples " << samples);
+        auto c = check_text(spoiled_at("3j(j, j, 0; m, -m, 0) == (-1)^(j-m) / sqrt(2*j+1)", "j", "8"), 2, samples,
+                            unhurried);
+        CHECK(caught(c.report.result));
+    }
+}
+
+TEST_CASE("the recoupling coefficient of three j with a factor wrong only at J = 7 is caught",
+          "[verify][reach][slow]") {
     // Edmonds (1957) 6.1.5 / DLMF 34.4: the sum of four Clebsch-Gordan coefficients is
     // (-1)^(j1+j2+j3+J) sqrt((2 j12+1)(2 j23+1)) {j1 j2 j12; j3 J j23}.
     const std::string sum =
         "sum(m1, m2, m3, m12, m23 : <j1 m1, j2 m2 | j12 m12> * <j12 m12, j3 m3 | J M> * "
         "<j2 m2, j3 m3 | j23 m23> * <j1 m1, j23 m23 | J M>)";
     const std::string closed = "(-1)^(j1+j2+j3+J) * sqrt((2*j12+1)*(2*j23+1)) * 6j{j1, j2, j12; j3, J, j23}";
-    auto right = check_text(sum + " == " + closed);
+    auto right = check_text(sum + " == " + closed, 2, 200, unhurried);
     CHECK(right.report.result == verdict::holds);
-    auto wrong = check_text(spoiled_at(sum + " == " + closed, "J", "7"));
+    auto wrong = check_text(spoiled_at(sum + " == " + closed, "J", "7"), 2, 200, unhurried);
     REQUIRE(caught(wrong.report.result));
     REQUIRE(wrong.report.counter);
     bool at_seven = false;
@@ -51,7 +68,7 @@ TEST_CASE("the recoupling coefficient of three j with a factor wrong only at J =
     CHECK(at_seven);
 }
 
-TEST_CASE("true identities times 1 + delta(j, v), v <= 20, are always caught", "[verify][reach]") {
+TEST_CASE("true identities times 1 + delta(j, v), v <= 20, are always caught", "[verify][reach][slow]") {
     // Each free j of these takes every value 0, 1/2, ..., 20 at a point where both sides are
     // nonzero, so each spoiled identity is false somewhere.
     struct source {
@@ -78,7 +95,7 @@ TEST_CASE("true identities times 1 + delta(j, v), v <= 20, are always caught", "
         std::string v = twice % 2 == 0 ? std::to_string(twice / 2) : std::to_string(twice) + "/2";
         std::string text = spoiled_at(s.identity, j, v);
         INFO(text);
-        auto c = check_text(text);
+        auto c = check_text(text, 2, 200, unhurried);
         CHECK(caught(c.report.result));
         if (caught(c.report.result)) ++failures_caught;
     }
@@ -87,7 +104,7 @@ TEST_CASE("true identities times 1 + delta(j, v), v <= 20, are always caught", "
 
 TEST_CASE("a check reports how far its points reached", "[verify][reach]") {
     // DLMF 34.5.8
-    auto c = check_text("6j{a, b, c; d, e, f} == 6j{b, a, c; e, d, f}");
+    auto c = check_text("6j{a, b, c; d, e, f} == 6j{b, a, c; e, d, f}", 2, 200, unhurried);
     REQUIRE(c.report.result == verdict::holds);
     CHECK(c.report.reach.largest_twice_j >= 2 * 50);  // the far points (common practice, no source)
     CHECK(c.report.reach.cover_max_j == 20);
@@ -133,8 +150,8 @@ TEST_CASE("finitely many admissible points, all checked, are a proof", "[verify]
     CHECK(three.report.points == 3);
 }
 
-TEST_CASE("with no exhaustive or random points, false DLMF identities still do not hold", "[verify][reach]") {
-    // Each is a DLMF chapter 34 identity spoiled by a swapped argument or a dropped factor;
+TEST_CASE("with no exhaustive or random points, false DLMF identities still do not hold", "[verify][reach][slow]") {
+    // Each is a DLMF chapter 34 identity spoiled by a swapped argument, a phase or a dropped factor;
     // depth 0 and no random samples leave only the far and coverage points.
     const char* spoiled[] = {
         "6j{a, b, c; d, e, f} == 6j{a, e, c; d, b, f}",                             // 34.5.8, wrong pair
@@ -142,17 +159,33 @@ TEST_CASE("with no exhaustive or random points, false DLMF identities still do n
         "3j(j, j, 0; m, -m, 0) == (-1)^(j-m)",                                      // 34.3.1 without 1/sqrt(2j+1)
         "9j{a, b, c; d, e, f; g, h, i} == 9j{a, b, c; g, h, i; d, e, f}",           // 34.6.2's symmetry, no phase
         "<j1 m1, j2 m2 | j3 m3> == (-1)^(j1-j2+m3) * 3j(j1, j2, j3; m1, m2, -m3)",  // 34.1.1 without sqrt(2j3+1)
+        "<j1 m1, j2 m2 | j3 m3> == (-1)^(j1-j2-m3) * sqrt(2*j3+1) * 3j(j1, j2, j3; m1, m2, -m3)",  // 34.1.1, -m3
+        "3j(j1, j2, j3; -m1, -m2, -m3) == (-1)^(j1+j2-j3) * 3j(j1, j2, j3; m1, m2, m3)",           // 34.3.10, -j3
+        "3j(j, j, 0; m, -m, 0) == (-1)^(j+m) / sqrt(2*j+1)",                                       // 34.3.1, +m
+        "3j(j1, j2, j3; m1, m2, m3) == -(-1)^(j1+j2+j3) * 3j(j1, j3, j2; m1, m3, m2)",             // 34.3.9, sign
+        "3j(j1, j2, j3; m1, m2, m3) == 3j(j2, j3, j1; m1, m3, m2)",  // 34.3.8 with the m's misplaced
+        // 34.5.15 (arrangement from memory) with x+p-q for x+p+q
+        "sum(x : (-1)^(x+p-q) * (2*x+1) * 6j{a, b, x; c, d, p} * 6j{a, b, x; d, c, q}) == 6j{a, d, p; b, c, q}",
+        // 34.5.14 without (2 l3+1)
+        "sum(j3 : (2*j3+1) * 6j{j1, j2, j3; l1, l2, l3} * 6j{j1, j2, j3; l1, l2, k}) == "
+        "delta(l3, k) * tri(j1, l2, l3) * tri(l1, j2, l3)",
+        // 34.3.16 without (2 j3+1)
+        "sum(m1, m2 : 3j(j1, j2, j3; m1, m2, m3) * 3j(j1, j2, k; m1, m2, n)) == "
+        "delta(j3, k) * delta(m3, n) * tri(j1, j2, j3)",
+        // 34.6.2 without (-1)^(2j)
+        "9j{j11, j12, j13; j21, j22, j23; j31, j32, j33} == sum(j : (2*j+1) * 6j{j11, j21, j31; j32, j33, j} * "
+        "6j{j12, j22, j32; j21, j, j23} * 6j{j13, j23, j33; j, j11, j12})",
     };
     for (const char* text : spoiled) {
         INFO(text);
-        auto c = check_text(text, 0, 0);
+        auto c = check_text(text, 0, 0, unhurried);
         CHECK(caught(c.report.result));
     }
 }
 
 TEST_CASE("a phase the first points do not determine is found from the further ones", "[verify][reach]") {
     // DLMF 34.3.9: an odd column permutation costs (-1)^(a+b+c).
-    auto c = check_text("3j(a, b, c; ma, mb, mc) == 3j(b, a, c; mb, ma, mc)", 0, 3);
+    auto c = check_text("3j(a, b, c; ma, mb, mc) == 3j(b, a, c; mb, ma, mc)", 0, 3, unhurried);
     CHECK(c.report.result == verdict::fails_by_phase);
     CHECK(c.missing_phase == "(-1)^(a+b+c)");
 }
