@@ -175,13 +175,13 @@ void latex_document::evaluation(const result& r) {
 
 namespace {
 
-// Where a missing phase belongs, with the summation indices in math.
-std::string site_latex(const std::optional<check_record::summand_site>& site) {
-    if (!site) return words("the right side");
+// "holds after multiplying <where> by", with the summation indices in math.
+std::string repair_site_latex(const std::optional<check_record::summand_site>& site) {
+    if (!site) return words("holds after multiplying the right side by ");
     std::string indices;
     for (const GiNaC::ex& i : site->indices) indices += (indices.empty() ? "" : ",\\, ") + to_latex(i);
-    return words("the summand of the sum over ") + " " + indices +
-           words(site->on_left ? " on the left side" : " on the right side");
+    return words("holds after multiplying the summand of the sum over ") + " " + indices +
+           words(site->on_left ? " on the left side by " : " on the right side by ");
 }
 
 }  // namespace
@@ -221,8 +221,7 @@ void latex_document::check(const result& res) {
             break;
         case verdict::fails_by_phase:
             f.relations = {"\\neq"};
-            f.notes = {"\\quad" + words("holds after multiplying ") + site_latex(r.phase_site) + words(" by ") + " " +
-                       to_latex(make_phase(*r.missing_phase))};
+            f.notes = {"\\quad" + repair_site_latex(r.phase_site) + " " + to_latex(make_phase(*r.missing_phase))};
             break;
         case verdict::fails_by_factor:
             f.relations = {"\\neq"};

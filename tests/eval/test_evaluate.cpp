@@ -47,7 +47,7 @@ number sqrt_of(long n) { return number::sqrt_of(cln::cl_RA(n)); }
 
 }  // namespace
 
-TEST_CASE("sum over m of (-1)^(j-m) 3j(j j 0; m -m 0) is sqrt(2j+1)", "[eval]") {
+TEST_CASE("sum over m of (-1)^(j-m) 3j(j j 0 | m -m 0) is sqrt(2j+1)", "[eval]") {
     // DLMF 34.3.1 gives each term as 1/sqrt(2j+1); there are 2j+1 terms.
     prepared p("sum(m : (-1)^(j-m) * 3j(j, j, 0; m, -m, 0))");
     for (int twice_j = 0; twice_j <= 16; ++twice_j) {

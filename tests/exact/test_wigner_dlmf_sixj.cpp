@@ -43,7 +43,7 @@ int for_each_admissible(long limit, long l1, long dl2, long dl3, const std::func
 
 }  // namespace
 
-TEST_CASE("exact: DLMF 34.5.1: {j1 j2 j3; 0 j3 j2}", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.5.1: {j1 j2 j3 | 0 j3 j2}", "[exact][wigner][dlmf]") {
     const int n = for_each_admissible(24, 0, 0, 0, [](long a, long b, long c) {
         // (-1)^J / sqrt((2j2+1)(2j3+1)),  J = j1+j2+j3
         const number expected = signed_root(phase((a + b + c) / 2), cln::cl_RA(1) / (I(b + 1) * (c + 1)));
@@ -52,7 +52,7 @@ TEST_CASE("exact: DLMF 34.5.1: {j1 j2 j3; 0 j3 j2}", "[exact][wigner][dlmf]") {
     CHECK(n > 1000);
 }
 
-TEST_CASE("exact: DLMF 34.5.2: {j1 j2 j3; 1/2 j3-1/2 j2+1/2}", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.5.2: {j1 j2 j3 | 1/2 j3-1/2 j2+1/2}", "[exact][wigner][dlmf]") {
     const int n = for_each_admissible(24, 1, 1, -1, [](long a, long b, long c) {
         // (-1)^J sqrt((j1+j3-j2)(j1+j2-j3+1) / ((2j2+1)(2j2+2) 2j3 (2j3+1)))
         const cln::cl_RA square = cln::cl_RA(I(a + c - b) * (a + b - c + 2)) / 4 / (I(b + 1) * (b + 2) * c * (c + 1));
@@ -61,7 +61,7 @@ TEST_CASE("exact: DLMF 34.5.2: {j1 j2 j3; 1/2 j3-1/2 j2+1/2}", "[exact][wigner][
     CHECK(n > 500);
 }
 
-TEST_CASE("exact: DLMF 34.5.3: {j1 j2 j3; 1/2 j3-1/2 j2-1/2}", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.5.3: {j1 j2 j3 | 1/2 j3-1/2 j2-1/2}", "[exact][wigner][dlmf]") {
     const int n = for_each_admissible(24, 1, -1, -1, [](long a, long b, long c) {
         // (-1)^J sqrt((j2+j3-j1)(j1+j2+j3+1) / (2j2 (2j2+1) 2j3 (2j3+1)))
         const cln::cl_RA square = cln::cl_RA(I(b + c - a) * (a + b + c + 2)) / 4 / (I(b) * (b + 1) * c * (c + 1));
@@ -70,7 +70,7 @@ TEST_CASE("exact: DLMF 34.5.3: {j1 j2 j3; 1/2 j3-1/2 j2-1/2}", "[exact][wigner][
     CHECK(n > 500);
 }
 
-TEST_CASE("exact: DLMF 34.5.4: {j1 j2 j3; 1 j3-1 j2-1}", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.5.4: {j1 j2 j3 | 1 j3-1 j2-1}", "[exact][wigner][dlmf]") {
     const int n = for_each_admissible(24, 2, -2, -2, [](long a, long b, long c) {
         // (-1)^J sqrt(J(J+1)(J-2j1)(J-2j1-1) / ((2j2-1) 2j2 (2j2+1) (2j3-1) 2j3 (2j3+1)))
         const long J = (a + b + c) / 2;
@@ -81,7 +81,7 @@ TEST_CASE("exact: DLMF 34.5.4: {j1 j2 j3; 1 j3-1 j2-1}", "[exact][wigner][dlmf]"
     CHECK(n > 300);
 }
 
-TEST_CASE("exact: DLMF 34.5.5: {j1 j2 j3; 1 j3-1 j2}", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.5.5: {j1 j2 j3 | 1 j3-1 j2}", "[exact][wigner][dlmf]") {
     const int n = for_each_admissible(24, 2, 0, -2, [](long a, long b, long c) {
         // (-1)^J sqrt(2(J+1)(J-2j1)(J-2j2)(J-2j3+1) / (2j2 (2j2+1)(2j2+2)(2j3-1) 2j3 (2j3+1)))
         const long J = (a + b + c) / 2;
@@ -92,7 +92,7 @@ TEST_CASE("exact: DLMF 34.5.5: {j1 j2 j3; 1 j3-1 j2}", "[exact][wigner][dlmf]") 
     CHECK(n > 300);
 }
 
-TEST_CASE("exact: DLMF 34.5.6: {j1 j2 j3; 1 j3-1 j2+1}", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.5.6: {j1 j2 j3 | 1 j3-1 j2+1}", "[exact][wigner][dlmf]") {
     const int n = for_each_admissible(24, 2, 2, -2, [](long a, long b, long c) {
         // (-1)^J sqrt((J-2j2-1)(J-2j2)(J-2j3+1)(J-2j3+2) / ((2j2+1)(2j2+2)(2j2+3)(2j3-1) 2j3 (2j3+1)))
         const long J = (a + b + c) / 2;
@@ -103,7 +103,7 @@ TEST_CASE("exact: DLMF 34.5.6: {j1 j2 j3; 1 j3-1 j2+1}", "[exact][wigner][dlmf]"
     CHECK(n > 300);
 }
 
-TEST_CASE("exact: DLMF 34.5.7: {j1 j2 j3; 1 j3 j2}", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.5.7: {j1 j2 j3 | 1 j3 j2}", "[exact][wigner][dlmf]") {
     const int n = for_each_admissible(24, 2, 0, 0, [](long a, long b, long c) {
         // (-1)^(J+1) 2 (j2(j2+1) + j3(j3+1) - j1(j1+1)) / sqrt(2j2 (2j2+1)(2j2+2) 2j3 (2j3+1)(2j3+2)),
         // with j(j+1) = 2j (2j+2) / 4

@@ -19,7 +19,7 @@ number signed_root(int sign, const cln::cl_RA& square) { return sign * number::s
 
 }  // namespace
 
-TEST_CASE("exact: DLMF 34.3.1: (j j 0; m -m 0)", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.3.1: (j j 0 | m -m 0)", "[exact][wigner][dlmf]") {
     for (long tj = 0; tj <= 60; ++tj)
         for (long tm = -tj; tm <= tj; tm += 2) {
             // (-1)^(j-m) / sqrt(2j+1)
@@ -29,7 +29,7 @@ TEST_CASE("exact: DLMF 34.3.1: (j j 0; m -m 0)", "[exact][wigner][dlmf]") {
         }
 }
 
-TEST_CASE("exact: DLMF 34.3.2: (j j 1; m -m 0)", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.3.2: (j j 1 | m -m 0)", "[exact][wigner][dlmf]") {
     for (long tj = 1; tj <= 60; ++tj)
         for (long tm = -tj; tm <= tj; tm += 2) {
             // (-1)^(j-m) 2m / sqrt(2j (2j+1) (2j+2))
@@ -40,7 +40,7 @@ TEST_CASE("exact: DLMF 34.3.2: (j j 1; m -m 0)", "[exact][wigner][dlmf]") {
         }
 }
 
-TEST_CASE("exact: DLMF 34.3.3: (j j 1; m -m-1 1)", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.3.3: (j j 1 | m -m-1 1)", "[exact][wigner][dlmf]") {
     for (long tj = 1; tj <= 60; ++tj)
         for (long tm = -tj; tm <= tj; tm += 2) {
             // (-1)^(j-m) sqrt(2 (j-m)(j+m+1) / (2j (2j+1) (2j+2))), with 2(j-m)(j+m+1) = (2j-2m)(2j+2m+2)/2
@@ -52,7 +52,7 @@ TEST_CASE("exact: DLMF 34.3.3: (j j 1; m -m-1 1)", "[exact][wigner][dlmf]") {
         }
 }
 
-TEST_CASE("exact: DLMF 34.3.5: (j1 j2 j3; 0 0 0)", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.3.5: (j1 j2 j3 | 0 0 0)", "[exact][wigner][dlmf]") {
     for (long j1 = 0; j1 <= 18; ++j1)
         for (long j2 = 0; j2 <= 18; ++j2)
             for (long j3 = std::labs(j1 - j2); j3 <= j1 + j2; ++j3) {
@@ -71,7 +71,7 @@ TEST_CASE("exact: DLMF 34.3.5: (j1 j2 j3; 0 0 0)", "[exact][wigner][dlmf]") {
             }
 }
 
-TEST_CASE("exact: DLMF 34.3.6: (j1 j2 j1+j2; m1 m2 -m1-m2)", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.3.6: (j1 j2 j1+j2 | m1 m2 -m1-m2)", "[exact][wigner][dlmf]") {
     for (long a = 0; a <= 14; ++a)  // a = 2j1, b = 2j2
         for (long b = 0; b <= 14; ++b)
             for (long tm1 = -a; tm1 <= a; tm1 += 2)
@@ -88,7 +88,7 @@ TEST_CASE("exact: DLMF 34.3.6: (j1 j2 j1+j2; m1 m2 -m1-m2)", "[exact][wigner][dl
                 }
 }
 
-TEST_CASE("exact: DLMF 34.3.7: (j1 j2 j3; j1 -j1-m3 m3)", "[exact][wigner][dlmf]") {
+TEST_CASE("exact: DLMF 34.3.7: (j1 j2 j3 | j1 -j1-m3 m3)", "[exact][wigner][dlmf]") {
     int checked = 0;
     for (long a = 0; a <= 12; ++a)
         for (long b = 0; b <= 12; ++b)

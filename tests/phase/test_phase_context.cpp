@@ -189,7 +189,7 @@ TEST_CASE("phase: two odd column permutations of a 3j cost nothing", "[phase]") 
     CHECK(ctx.canonical(sum + sum) == linear_form());
 }
 
-TEST_CASE("phase: the phases of 3j(j j 0; m -m 0) and 3j(j j 0; -m m 0) agree", "[phase]") {
+TEST_CASE("phase: the phases of 3j(j j 0 | m -m 0) and 3j(j j 0 | -m m 0) agree", "[phase]") {
     context ctx;
     ctx.declare_angular("j");
     ctx.declare_projection("m", j);

@@ -121,7 +121,7 @@ TEST_CASE("eval in LaTeX: the exact root, the decimal and the point", "[print][l
     CHECK(at.out.find("\\approx") == std::string::npos);
 }
 
-TEST_CASE("checks in LaTeX: = with the evidence, \\neq with the diagnosis", "[print][latex]") {
+TEST_CASE("checks in LaTeX: = with the evidence, neq with the diagnosis", "[print][latex]") {
     // Swapping two columns of a 3j costs (-1)^(a+b+c) (DLMF 34.3.9).
     auto fails = run_cli({"latex", "--fragment", "-e", "check 3j(a, b, c; ma, mb, mc) == 3j(b, a, c; mb, ma, mc)"});
     CHECK(fails.code == 1);
@@ -150,7 +150,7 @@ TEST_CASE("comments become paragraphs that cannot emit TeX commands", "[print][l
     CHECK(compile(r.out, "comments").status == 0);
 }
 
-TEST_CASE("let names are typeset and used by name; the triangle condition has one legend", "[print][latex]") {
+TEST_CASE("let names are typeset and used by name, and the triangle condition has one legend", "[print][latex]") {
     auto r = run_cli({"latex", "-"},
                      "let W = sum(m1, m2 : <a m1, b m2 | c m3> * <a m1, b m2 | d m4>)\nsimplify W\n"
                      "sum(m1, m2 : <a m1, b m2 | c m3>^2)\n");

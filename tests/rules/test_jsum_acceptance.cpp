@@ -188,7 +188,7 @@ TEST_CASE("delta elimination in disguise: the later name goes everywhere", "[rul
     CHECK(count_of(s.text, "q") == count_of(s.text, "delta("));  // q only inside the deltas
 }
 
-TEST_CASE("a delta with a value puts the value in; a delta taken twice counts once", "[rules][cli]") {
+TEST_CASE("a delta with a value puts the value in, and a delta taken twice counts once", "[rules][cli]") {
     // Common practice, no source: delta(c, 0) f(c) = delta(c, 0) f(0), delta^2 = delta; then the
     // 6j with a zero argument (DLMF 34.5.1) and tri(a, a, 0) = 1 (DLMF 34.2, the triangle
     // condition).  Written as a bubble pair leaves it: the delta squared, its value second.
