@@ -125,20 +125,23 @@ public:
         }
     }
 
-    ex term(const ex& e, const constraints& inherited) {
+    // `in_scope`: the summation indices of the sums around e.
+    ex term(const ex& e, const constraints& inherited, const std::set<std::string>& in_scope = {}) {
         if (is_a<add>(e)) {
             ex out = 0;
-            for (const ex& t : e) out += term(t, inherited);
+            for (const ex& t : e) out += term(t, inherited, in_scope);
             return out;
         }
         constraints here = inherited;
         here.add_factor(e);
         phase::context ctx = context_for(e, here);
         auto factor = [&](const ex& f) -> ex {
-            if (is_a<phase_factor>(f)) return reduce(f.op(0), ctx);
+            if (is_a<phase_factor>(f)) return reduce(f.op(0), ctx, in_scope);
             if (is_a<index_sum>(f)) {
                 const auto& s = ex_to<index_sum>(f);
-                return make_sum(term(s.body(), here), s.indices());
+                std::set<std::string> inner = in_scope;
+                for (const ex& i : s.indices()) inner.insert(ex_to<symbol>(i).get_name());
+                return make_sum(term(s.body(), here, inner), s.indices());
             }
             return f;
         };
@@ -185,7 +188,7 @@ private:
         return ctx;
     }
 
-    ex reduce(const ex& exponent, const phase::context& ctx) {
+    ex reduce(const ex& exponent, const phase::context& ctx, const std::set<std::string>& in_scope) {
         phase::linear_form x = linear_form_of(exponent);
         phase::integrality i = ctx.check_integer(x);
         if (!i.integer && is_a<numeric>(exponent))
@@ -199,7 +202,14 @@ private:
                                     "; declare the parities with 'int' or 'half', or fix the phase");
         }
         if (!rewrite_) return make_phase(exponent);
-        return make_phase(to_ex(ctx.canonical(x), numbers_, own_symbols_));
+        const ex shortest = to_ex(ctx.canonical(x), numbers_, own_symbols_);
+        // The relations of a sum's symbols hold inside it: a phase outside the sum may be
+        // proved with them, but not rewritten into its indices (m3 = -m1-m2 of a summed 3j
+        // would put the bound m3 where it means nothing).
+        const std::set<std::string> written = names_in(exponent);
+        for (const std::string& n : names_in(shortest))
+            if (bound_names_.count(n) && !in_scope.count(n) && !written.count(n)) return make_phase(exponent);
+        return make_phase(shortest);
     }
 
     const quantum_numbers& numbers_;

@@ -35,6 +35,7 @@ const std::vector<const identity*>& all_identities() {
                  &clebsch_as_threej_identity(),
                  &phase_reduction_identity(),
                  &closed_form_identity(),
+                 &projection_range_identity(),
                  &input_form_identity(),
              })
             out.push_back(code);

@@ -91,8 +91,11 @@ simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& nu
     // The owners of projections in phases are part of the closed form: without them the answer
     // cannot be read back (projection_owners.hpp).  Owners as this input pairs them, so that
     // proj(j, m) is 1 wherever the input is defined.
-    const ex closed = with_projection_owners(closed_form(x), numbers.for_statement(e));
-    if (!closed.is_equal(x)) steps_taken.push_back(step_by(closed_form_identity(), x, closed, true));
+    const ex collected = closed_form(x);
+    if (!collected.is_equal(x)) steps_taken.push_back(step_by(closed_form_identity(), x, collected, true));
+    const ex closed = with_projection_owners(collected, numbers.for_statement(e));
+    if (!closed.is_equal(collected))
+        steps_taken.push_back(step_by(projection_range_identity(), collected, closed, true));
     x = closed;
     // Counted on the input as canonicalized at the start (its phases do not change the counts);
     // the full canonical form, phases reduced, only when it is the answer.

@@ -46,6 +46,20 @@ const identity& closed_form_identity() {
     return id;
 }
 
+// proj(j, m) is 1 wherever a column (j, m) of a coupling symbol can be nonzero, so it may join
+// one; the answer keeps it only where the reduction removed every such column.
+const identity& projection_range_identity() {
+    static const identity id = make_identity("proj(j, m) kept where a phase holds m and no column does",
+                                             "common practice, no source", [](pattern_table& p, ex& left, ex& right) {
+                                                 auto [a, b, c] = p.angulars({"a", "b", "c"});
+                                                 symbol ma = p.projection("ma", a), mb = p.projection("mb", b),
+                                                        mc = p.projection("mc", c);
+                                                 left = make_phase(a - ma) * wigner3j(a, b, c, ma, mb, mc).hold();
+                                                 right = left * projection_of(a, ma).hold();
+                                             });
+    return id;
+}
+
 const identity& input_form_identity() {
     static const identity id =
         make_identity("the input's own form kept", "no reduction with fewer terms, sums and symbols",

@@ -13,6 +13,8 @@ const identity& clebsch_as_threej_identity();
 const identity& phase_reduction_identity();
 // Like terms collected; a triangle that a symbol of the same product imposes dropped.
 const identity& closed_form_identity();
+// proj(j, m) added where a phase holds a projection whose columns the reduction removed.
+const identity& projection_range_identity();
 // The input in its canonical arrangement, where no reduction is shorter (the symbols'
 // symmetries, here DLMF 34.5.8).
 const identity& input_form_identity();

@@ -102,3 +102,33 @@ TEST_CASE("LaTeX writes proj(j, m) as a bracket [|m| <= j] and explains it once"
     CHECK(count_of(r.out, "[\\,|\\mathit{md}| \\le d\\,]") == 1);
     CHECK(count_of(r.out, "is $1$ when $m$ is one of the projections") == 1);
 }
+
+TEST_CASE("a phase outside a sum is never rewritten into the sum's indices", "[simplify][cli]") {
+    // Inside the sum m_c = -m_a-m_b = m_d (the zero sums of the two 3j, DLMF 34.3.1's selection
+    // rule), but m_c is bound there: outside, (-1)^(c+md) must not become (-1)^(c+mc).
+    for (const char* input : {"(-1)^(c+md) * sum(ma, mb, mc: 3j(a, b, c; ma, mb, mc) * 3j(a, b, d; ma, mb, md))",
+                              "(-1)^(2*a+c+md) * sum(ma, mb, mc: 3j(a, b, c; ma, mb, mc) * 3j(a, b, d; ma, mb, md))"}) {
+        INFO(input);
+        auto r = run_cli({"simplify", "-e", input});
+        INFO("stderr: " << r.err);
+        CHECK(r.code == 0);  // was 3: the answer held a free mc and failed its own check
+        CHECK(r.err.find("internal check failed") == std::string::npos);
+        const std::string answer = trimmed(r.out);
+        const std::string outside = answer.substr(0, answer.find("sum("));
+        CHECK(outside.find("mc") == std::string::npos);
+    }
+}
+
+TEST_CASE("the step that adds proj(j, m) has its own name in --steps", "[simplify][cli]") {
+    auto r = run_cli({"simplify", "--steps", "-e", orthogonality_with_phase});
+    REQUIRE(r.code == 0);
+    CHECK(r.out.find("proj(j, m) kept where a phase holds m and no column does") != std::string::npos);
+    // The answer comes first; among the steps after it, that step's "after" is where proj
+    // first appears (m_d lost its columns to c = d).
+    const std::size_t steps = r.out.find("\n#");
+    const std::size_t step = r.out.find("proj(j, m) kept where");
+    REQUIRE(steps != std::string::npos);
+    REQUIRE(step != std::string::npos);
+    CHECK(r.out.substr(steps, step - steps).find("proj(d, md)") == std::string::npos);
+    CHECK(r.out.find("proj(d, md)", step) != std::string::npos);
+}
