@@ -56,7 +56,8 @@ std::optional<arrangement> find_arrangement(const ex& lhs, const ex& rhs, const 
                                             const sampling_options& options) {
     for (int side : {1, 0}) {  // the right side first: it is usually the one quoted from a table
         const ex& whole = side == 0 ? lhs : rhs;
-        compared_points seen{points, side == 0 ? rhs_values : lhs_values};
+        const repaired_side_test test(side == 0 ? rhs : lhs, numbers, d, points, side == 0 ? rhs_values : lhs_values,
+                                      options);
         std::vector<ex> symbols;
         sixjs_in(whole, symbols);
         for (const ex& s : symbols) {
@@ -69,8 +70,7 @@ std::optional<arrangement> find_arrangement(const ex& lhs, const ex& rhs, const 
                 for (std::size_t k = 0; k < 6; ++k) x[k] = entries[order[k]];
                 if (!tried.insert(triads_of(x)).second) continue;  // an order of a class already tried
                 ex other = held_sixj(x[0], x[1], x[2], x[3], x[4], x[5]);
-                if (repaired_side_holds(replaced(whole, s, other), side == 0 ? rhs : lhs, numbers, d, seen, options))
-                    return arrangement{s, other, side == 0};
+                if (test.holds(replaced(whole, s, other))) return arrangement{s, other, side == 0};
             }
         }
     }

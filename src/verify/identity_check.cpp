@@ -114,8 +114,7 @@ private:
             return true;  // a side is undefined here: the identity says nothing at this point
         } catch (const work_limit_exceeded&) {
             if (!bounded) throw;
-            ++too_costly_;
-            return true;
+            return true;  // too costly: reach skips it
         } catch (const std::domain_error&) {
             ++undefined_;
             return true;
@@ -171,7 +170,7 @@ private:
     static constexpr std::size_t hat_fit_points = 96;
     std::size_t mismatch_seen_ = 0;
     bool ratios_everywhere_ = true;  // no point where one side alone vanishes
-    std::size_t undefined_ = 0, too_costly_ = 0;
+    std::size_t undefined_ = 0;
     std::string first_undefined_;
     bool all_equal_ = true;
     bool one_side_vanishes_ = false;
@@ -281,10 +280,7 @@ check_report check_identity(const ex& lhs, const ex& rhs, const quantum_numbers&
     report.nonzero = cmp.nonzero();
     report.undefined = cmp.undefined();
     report.reach = reach.summary();
-    if (report.points == 0 && report.undefined > 0)
-        throw division_by_zero(cmp.first_undefined(), "at every admissible point checked (" +
-                                                          std::to_string(report.undefined) +
-                                                          (report.undefined == 1 ? " point)" : " points)"));
+    if (report.points == 0 && report.undefined > 0) throw undefined_everywhere(cmp.first_undefined(), report.undefined);
 
     if (report.stopped) {
         report.counter = cmp.first_mismatch();

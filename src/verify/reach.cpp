@@ -79,6 +79,15 @@ reach_summary reach_tracker::summary() const {
     return s;
 }
 
+std::vector<point> covering_points(const sampling_domain& domain, const sampling_options& options, reach_tracker& reach,
+                                   std::size_t k, long twice, std::size_t count, std::uint64_t seed,
+                                   const std::vector<point>& avoid) {
+    std::vector<point> tries = pinned_points(domain, k, twice, count, seed, avoid);
+    // Excluded only where no admissible point has the value, not where every one was seen.
+    if (tries.empty() && pinned_points(domain, k, twice, 1, options.seed, {}).empty()) reach.exclude(k, twice);
+    return tries;
+}
+
 bool reach_further(const sampling_domain& domain, const sampling_options& options, reach_tracker& reach,
                    const std::vector<point>& seen, const std::function<bool(const point&)>& observe) {
     const auto deadline = std::chrono::steady_clock::now() + options.reach_time;
@@ -91,10 +100,8 @@ bool reach_further(const sampling_domain& domain, const sampling_options& option
     for (const auto& [k, twice] : reach.missing()) {
         if (!in_time()) return true;
         if (reach.covered(k, twice)) continue;  // a point drawn for another pair covered it
-        std::vector<point> tries =
-            pinned_points(domain, k, twice, 4, options.seed ^ (0x9e3779b97f4a7c15ULL * (k + 1) + twice), seen);
-        // Excluded only where no admissible point has the value, not where every one was seen.
-        if (tries.empty() && pinned_points(domain, k, twice, 1, options.seed, {}).empty()) reach.exclude(k, twice);
+        std::vector<point> tries = covering_points(domain, options, reach, k, twice, 4,
+                                                   options.seed ^ (0x9e3779b97f4a7c15ULL * (k + 1) + twice), seen);
         for (const point& t : tries) {
             check_deadline();
             if (!observe(t)) return false;

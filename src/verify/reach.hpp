@@ -6,6 +6,7 @@
 
 #include <chrono>
 #include <cstddef>
+#include <cstdint>
 #include <functional>
 #include <utility>
 #include <vector>
@@ -44,6 +45,12 @@ private:
     std::vector<std::vector<char>> seen_;  // per angular momentum, per doubled value: 0 no, 1 yes, 2 excluded
     long largest_ = -1;
 };
+
+// Up to `count` points with free j number k at doubled value `twice` (none of them in
+// `avoid`); where no admissible point has that value at all, the pair is excluded from `reach`.
+std::vector<point> covering_points(const sampling_domain& domain, const sampling_options& options, reach_tracker& reach,
+                                   std::size_t k, long twice, std::size_t count, std::uint64_t seed,
+                                   const std::vector<point>& avoid);
 
 // Evaluates far_points random points with j up to far_max_j, then looks for each missing
 // (j, value) pair among a few pinned points until one is nonzero, for at most reach_time.  `observe` evaluates a point

@@ -14,14 +14,24 @@
 
 namespace couplet::verify {
 
-struct compared_points {
-    const std::vector<point>& points;
-    const std::vector<exact::number>& other_values;  // the unchanged side at each point
-};
+// Built once per side: the unchanged side is compiled and evaluated at the fresh points here,
+// so that each of the many candidate repairs costs only its own evaluations.
+class repaired_side_test {
+public:
+    // `seen_values`: the unchanged side at each of `seen`.
+    repaired_side_test(const GiNaC::ex& unchanged, const quantum_numbers& numbers, const sampling_domain& d,
+                       const std::vector<point>& seen, const std::vector<exact::number>& seen_values,
+                       const sampling_options& options);
 
-// False also where the repaired side cannot be evaluated (a phase exponent that is not an
-// integer, a division by 0).
-bool repaired_side_holds(const GiNaC::ex& repaired, const GiNaC::ex& other, const quantum_numbers& numbers,
-                         const sampling_domain& d, const compared_points& seen, const sampling_options& options);
+    // False also where the repaired side cannot be evaluated (a phase exponent that is not an
+    // integer, a division by 0) at a point where the unchanged side is defined.
+    bool holds(const GiNaC::ex& repaired) const;
+
+private:
+    const quantum_numbers& numbers_;
+    const sampling_domain& d_;
+    std::vector<point> points_;  // the seen ones compared, then the fresh ones
+    std::vector<exact::number> values_;
+};
 
 }  // namespace couplet::verify

@@ -51,11 +51,9 @@ std::vector<point> reach_batch(const sampling_domain& d, const sampling_options&
     std::size_t wanted = 0;
     for (const auto& [k, twice] : reach.missing()) {
         if (wanted == 2) break;
-        std::vector<point> p = pinned_points(d, k, twice, 1, o.seed ^ (round * 0x9e3779b97f4a7c15ULL + twice), drawn);
-        if (p.empty()) {
-            if (pinned_points(d, k, twice, 1, o.seed, {}).empty()) reach.exclude(k, twice);
-            continue;
-        }
+        std::vector<point> p =
+            covering_points(d, o, reach, k, twice, 1, o.seed ^ (round * 0x9e3779b97f4a7c15ULL + twice), drawn);
+        if (p.empty()) continue;
         ++wanted;
         drawn.push_back(p.front());
         out.push_back(p.front());
@@ -152,10 +150,7 @@ simplification_check verify_simplification(const GiNaC::ex& input, const GiNaC::
     // The input undefined wherever it was evaluated is an error, not an agreement.
     auto finish = [&]() {
         out.reach = reach.summary();
-        if (out.points == 0 && out.undefined > 0)
-            throw division_by_zero(undefined_divisor, "at every admissible point checked (" +
-                                                          std::to_string(out.undefined) +
-                                                          (out.undefined == 1 ? " point)" : " points)"));
+        if (out.points == 0 && out.undefined > 0) throw undefined_everywhere(undefined_divisor, out.undefined);
         return out;
     };
 

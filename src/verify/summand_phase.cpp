@@ -59,7 +59,8 @@ std::optional<summand_phase> find_summand_phase(const ex& lhs, const ex& rhs, co
                                                 const sampling_options& options) {
     for (int side = 0; side < 2; ++side) {
         const ex& whole = side == 0 ? lhs : rhs;
-        compared_points seen{points, side == 0 ? rhs_values : lhs_values};
+        const repaired_side_test test(side == 0 ? rhs : lhs, numbers, d, points, side == 0 ? rhs_values : lhs_values,
+                                      options);
         std::vector<ex> sums;
         sums_in(whole, sums);
         for (const ex& s : sums) {
@@ -70,8 +71,7 @@ std::optional<summand_phase> find_summand_phase(const ex& lhs, const ex& rhs, co
             for (const ex& i : sum.indices()) names.push_back(i);
             for (const ex& exponent : exponents(names)) {
                 ex repaired = replaced(whole, s, make_sum(sum.body() * make_phase(exponent), sum.indices()));
-                if (repaired_side_holds(repaired, side == 0 ? rhs : lhs, numbers, d, seen, options))
-                    return summand_phase{exponent, summand_site{index_list(sum), side == 0}};
+                if (test.holds(repaired)) return summand_phase{exponent, summand_site{index_list(sum), side == 0}};
             }
         }
     }

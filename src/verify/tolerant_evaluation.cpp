@@ -56,4 +56,9 @@ exact::number tolerant_expression::forgiving(const GiNaC::ex& e, const assignmen
     return compiled(e).at(values);
 }
 
+division_by_zero undefined_everywhere(const std::string& divisor, std::size_t points) {
+    return division_by_zero(divisor, "at every admissible point checked (" + std::to_string(points) +
+                                         (points == 1 ? " point)" : " points)"));
+}
+
 }  // namespace couplet::verify

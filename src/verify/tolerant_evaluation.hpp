@@ -9,6 +9,7 @@
 
 #include <map>
 #include <memory>
+#include <string>
 
 #include "eval/evaluate.hpp"
 #include "exact/number.hpp"
@@ -38,5 +39,9 @@ private:
     // Parts compiled on demand, only after the whole failed somewhere.
     mutable std::map<GiNaC::ex, std::unique_ptr<compiled_expression>, GiNaC::ex_is_less> parts_;
 };
+
+// The error of an expression whose divisor `divisor` was 0 at each of the `points` admissible
+// points a verification evaluated: undefined, not an identity that holds.
+division_by_zero undefined_everywhere(const std::string& divisor, std::size_t points);
 
 }  // namespace couplet::verify
