@@ -240,6 +240,50 @@ private:
     std::unique_ptr<state> state_;
 };
 
+// A table of one expression's values over ranges of its free quantum numbers, for testing a
+// numerical code against a derived formula.  The expression is prepared once; each row is an
+// exact evaluation.  Rows are numbered 0, 1, ... within the requested shard.
+enum class table_format { csv, json_lines };
+struct table_options {
+    std::string of;  // the `let` to tabulate; empty: the last statement's expression
+    // Each text gives names and their values: "j1, j2 = 0..5", "J = 1/2..9/2 step 1", "m = -1".
+    // Every value is a multiple of 1/2; a range steps by 1/2 unless it says otherwise, and a
+    // value the name's kind or parity excludes is skipped.  A name without a range takes the
+    // values its symbols allow given the names before it (a j by a triangle, an m by its j).
+    std::vector<std::string> ranges;
+    bool allowed_only = false;          // leave out rows that a selection rule makes 0 in every term
+    bool nonzero_only = false;          // leave out rows whose value is 0
+    std::size_t max_rows = 10'000'000;  // refuse a shard with more rows than this
+    std::size_t shard = 1, shards = 1;  // compute the shard-th of `shards` consecutive parts
+    table_format format = table_format::csv;
+};
+
+class table {
+public:
+    // Throws input_error for a request that cannot be carried out: an unknown name, a range
+    // that cannot be read (its message points into the range's text), a name nothing bounds,
+    // too many rows.
+    table(const program& p, const table_options& o);
+    ~table();
+    table(table&&) noexcept;
+    table& operator=(table&&) noexcept;
+
+    std::size_t size() const;                         // rows of this shard (before nonzero_only)
+    std::size_t total_size() const;                   // rows of the whole table
+    const std::vector<std::string>& columns() const;  // the quantum numbers, in column order
+    // CSV: the header line (written by the first shard only, so that the parts joined with
+    // `cat` are the whole table); JSON lines: empty.
+    std::string header() const;
+    // Writes rows [from, to) of this shard, one line each; returns how many were written.  A
+    // row where the expression divides by 0 is written with the value "undefined" (CSV) or
+    // null (JSON).  Throws input_error where a row cannot be evaluated at all.
+    std::size_t write(std::size_t from, std::size_t to, std::ostream& out) const;
+
+private:
+    struct state;
+    std::unique_ptr<state> state_;
+};
+
 // The conventions and bounds as the command line's --help states them.
 std::string conventions_text();
 

@@ -14,6 +14,7 @@
 #include <sstream>
 #include <utility>
 
+#include "cli/table_command.hpp"
 #include "cli/terminal_progress.hpp"
 #include "couplet/couplet.hpp"
 
@@ -213,6 +214,8 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
     app.require_subcommand(1, 1);
     request r;
     add_commands(app, r);
+    table_request table;
+    add_table_command(app, table, r.file, r.text, r.command);
     std::vector<std::string> reversed(args.rbegin(), args.rend() - (args.empty() ? 0 : 1));
     try {
         app.parse(reversed);
@@ -230,10 +233,12 @@ int run(const std::vector<std::string>& args, std::istream& in, std::ostream& ou
     bool explicit_sampling = false;
     for (CLI::App* sub : app.get_subcommands()) {
         if (sub->count("--expr")) r.has_text = true;
+        if (sub->get_name() == "table") continue;  // it samples nothing
         explicit_sampling = explicit_sampling || sub->count("--depth") || sub->count("--samples");
     }
     auto input = read_input(r, in, err);
     if (!input) return bad_input;
+    if (r.command == "table") return run_table(table, input->first, input->second, out, err);
     return run_input(r, input->first, input->second, options_of(r, explicit_sampling), out, err);
 }
 

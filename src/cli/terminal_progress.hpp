@@ -1,18 +1,29 @@
-// The progress of a long verification on a terminal.
+// The progress of a long run on stderr.
 #pragma once
 
 #include <chrono>
 #include <cstddef>
 #include <functional>
 #include <iosfwd>
+#include <string>
 
 namespace couplet::cli {
 
-// Prints "checking: done/total points" on one line of a terminal, only once a verification
-// has run for a while, at most a few times a second, and clears the line when it ends.
+// How a meter reads: "checking: 300/1200 points", or with a rate
+// "table: 120000/1766270 rows, 61000 rows/s, 27 s left".
+struct progress_style {
+    std::string label = "checking", unit = "points";
+    bool rate = false;
+    std::chrono::milliseconds delay{700};  // nothing is shown for runs shorter than this
+    // A terminal: one line rewritten in place; otherwise a line every few seconds.
+    bool terminal = true;
+};
+
+// Shown only once the run has gone on for the style's delay, at most a few times a second,
+// and cleared (on a terminal) when it ends.
 class terminal_progress {
 public:
-    explicit terminal_progress(std::ostream& out) : out_(out) {}
+    explicit terminal_progress(std::ostream& out, progress_style style = {}) : out_(out), style_(std::move(style)) {}
     ~terminal_progress();
     terminal_progress(const terminal_progress&) = delete;
     terminal_progress& operator=(const terminal_progress&) = delete;
@@ -25,6 +36,7 @@ public:
 private:
     using clock = std::chrono::steady_clock;
     std::ostream& out_;
+    progress_style style_;
     clock::time_point started_ = clock::now(), last_shown_{};
     bool shown_ = false;
 };

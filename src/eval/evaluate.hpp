@@ -53,6 +53,10 @@ struct evaluation_limits {
     long max_twice_j = 20000;         // 2j of any coupling-symbol entry
     long max_sum_terms = 10'000'000;  // summand evaluations in one call
     sum_enumeration enumeration = sum_enumeration::propagating;
+    // Keep coupling-symbol values between calls (the propagating enumeration): they recur
+    // across a sum's terms and a verification's points, but a table of one symbol meets each
+    // value once, and there the memo is all cost.
+    bool remember_symbols = true;
 };
 
 namespace eval_detail {
@@ -70,6 +74,11 @@ public:
 
     // Every free quantum number of the expression must be assigned.
     exact::number at(const assignment& values) const;
+    // The free quantum numbers, in the order at_twice takes their values.
+    std::vector<std::string> free_names() const;
+    // The value with the free numbers at twice[k] / 2, in the order of free_names(): the path of
+    // a loop over many points, without looking names up.
+    exact::number at_twice(const std::vector<long>& twice) const;
 
 private:
     std::unique_ptr<eval_detail::program> program_;

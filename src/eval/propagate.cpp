@@ -36,7 +36,10 @@ std::string rational_text(long numerator, long denominator) {
 class propagating : public node_runner<propagating> {
 public:
     propagating(program& p, const evaluation_limits& limits)
-        : node_runner(&p.memo, limits.max_sum_terms), p_(p), limits_(limits), t_(p.slot_names.size(), 0) {}
+        : node_runner(limits.remember_symbols ? &p.memo : nullptr, limits.max_sum_terms),
+          p_(p),
+          limits_(limits),
+          t_(p.slot_names.size(), 0) {}
 
     void assign(int slot, long doubled) { t_[slot] = doubled; }
 

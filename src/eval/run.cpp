@@ -192,6 +192,21 @@ public:
 
 }  // namespace
 
+namespace {
+
+// Every free slot has its value: the propagating enumeration where it applies, else the
+// rational one.
+exact::number value_given(eval_detail::program& p, const evaluation_limits& limits,
+                          const std::vector<std::pair<int, cln::cl_RA>>& given) {
+    if (limits.enumeration == sum_enumeration::propagating)
+        if (auto v = eval_detail::run_propagating(p, limits, given)) return *v;
+    machine m(p, limits);
+    for (const auto& [slot, v] : given) m.assign(slot, v);
+    return m.run(*p.root);
+}
+
+}  // namespace
+
 compiled_expression::compiled_expression(const GiNaC::ex& e, const quantum_numbers& numbers, evaluation_limits limits)
     : program_(std::make_unique<eval_detail::program>(eval_detail::compile(e, numbers))), limits_(limits) {}
 compiled_expression::~compiled_expression() = default;
@@ -216,11 +231,24 @@ exact::number compiled_expression::at(const assignment& values) const {
         for (const auto& n : missing) list += (list.empty() ? "" : ", ") + n;
         throw evaluation_error("no value given for " + list + " (write: eval EXPR at " + missing.front() + "=...)");
     }
-    if (limits_.enumeration == sum_enumeration::propagating)
-        if (auto v = eval_detail::run_propagating(*program_, limits_, given)) return *v;
-    machine m(*program_, limits_);
-    for (const auto& [slot, v] : given) m.assign(slot, v);
-    return m.run(*program_->root);
+    return value_given(*program_, limits_, given);
+}
+
+std::vector<std::string> compiled_expression::free_names() const {
+    std::vector<std::string> out;
+    for (int slot : program_->free_slots) out.push_back(program_->slot_names[slot]);
+    return out;
+}
+
+exact::number compiled_expression::at_twice(const std::vector<long>& twice) const {
+    if (twice.size() != program_->free_slots.size())
+        throw evaluation_error("at_twice: " + std::to_string(twice.size()) + " values for " +
+                               std::to_string(program_->free_slots.size()) + " free quantum numbers");
+    std::vector<std::pair<int, cln::cl_RA>> given;
+    given.reserve(twice.size());
+    for (std::size_t k = 0; k < twice.size(); ++k)
+        given.emplace_back(program_->free_slots[k], cln::cl_RA(twice[k]) / 2);
+    return value_given(*program_, limits_, given);
 }
 
 std::string describe(const assignment& at) {

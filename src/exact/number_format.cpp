@@ -18,6 +18,9 @@ namespace couplet::exact {
 namespace {
 
 std::string decimal_string(const cln::cl_I& x) {
+    // Most numbers fit a machine word, and CLN's printing through a stream is the slow part of
+    // writing a table row.
+    if (cln::integer_length(x) < 63) return std::to_string(cln::cl_I_to_long(x));
     std::ostringstream os;
     cln::fprintdecimal(os, x);
     return os.str();
