@@ -278,6 +278,7 @@ public:
     // row where the expression divides by 0 is written with the value "undefined" (CSV) or
     // null (JSON).  Throws input_error where a row cannot be evaluated at all.
     std::size_t write(std::size_t from, std::size_t to, std::ostream& out) const;
+    std::size_t append(std::size_t from, std::size_t to, std::string& out) const;  // the same, onto a string
 
 private:
     struct state;

@@ -204,11 +204,17 @@ std::string table::header() const {
 }
 
 std::size_t table::write(std::size_t from, std::size_t to, std::ostream& out) const {
+    std::string lines;
+    const std::size_t written = append(from, to, lines);
+    out << lines;
+    return written;
+}
+
+std::size_t table::append(std::size_t from, std::size_t to, std::string& out) const {
     const state& s = *state_;
     const std::size_t width = s.columns.size();
     const bool csv = s.options.format == table_format::csv;
     std::size_t written = 0;
-    std::string line;
     std::vector<long> twice(s.column_of_free.size());
     for (std::size_t r = from; r < std::min(to, size()); ++r) {
         const std::int32_t* t = s.rows.data() + r * width;
@@ -222,32 +228,30 @@ std::size_t table::write(std::size_t from, std::size_t to, std::ostream& out) co
                                  user_error(s.offset, "cannot evaluate at " + s.describe_row(t) + ": " + e.what()));
         }
         if (s.options.nonzero_only && value && value->is_zero()) continue;
-        line.clear();
-        if (!csv) line += '{';
+        if (!csv) out += '{';
         for (std::size_t c = 0; c < width; ++c) {
             if (!csv)
-                line += (c ? ",\"" : "\"") + s.columns[c] + "\":";
+                out += (c ? ",\"" : "\"") + s.columns[c] + "\":";
             else if (c)
-                line += ',';
-            write_doubled(line, t[c]);
+                out += ',';
+            write_doubled(out, t[c]);
         }
         if (csv) {
-            line += width ? "," : "";
-            line += value ? value->to_string() : "undefined";
-            line += ',';
-            if (value) write_double(line, value->to_double());
-            line += '\n';
+            out += width ? "," : "";
+            out += value ? value->to_string() : "undefined";
+            out += ',';
+            if (value) write_double(out, value->to_double());
+            out += '\n';
         } else {
-            line += width ? ",\"value\":" : "\"value\":";
-            line += value ? "\"" + value->to_string() + "\"" : "null";
-            line += ",\"decimal\":";
+            out += width ? ",\"value\":" : "\"value\":";
+            out += value ? "\"" + value->to_string() + "\"" : "null";
+            out += ",\"decimal\":";
             if (value)
-                write_double(line, value->to_double());
+                write_double(out, value->to_double());
             else
-                line += "null";
-            line += "}\n";
+                out += "null";
+            out += "}\n";
         }
-        out << line;
         ++written;
     }
     return written;

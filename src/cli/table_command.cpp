@@ -105,13 +105,11 @@ int run_table(const table_request& t, const std::string& name, const std::string
         run_ordered(
             blocks, t.jobs,
             [&](std::size_t b, std::string& into) {
-                std::ostringstream os;
                 try {
-                    rows.write(b * rows_per_block, (b + 1) * rows_per_block, os);
+                    rows.append(b * rows_per_block, (b + 1) * rows_per_block, into);
                 } catch (const input_error& e) {
                     throw std::runtime_error(e.diagnostic());  // crosses the worker's pipe as text
                 }
-                into = os.str();
             },
             [&](std::size_t b, const std::string& lines) {
                 out << lines;

@@ -10,6 +10,8 @@
 #include <cln/real.h>
 
 #include <cmath>
+#include <limits>
+#include <optional>
 #include <sstream>
 #include <stdexcept>
 
@@ -57,6 +59,28 @@ std::string format_digits(bool negative, const std::string& digits, long exponen
 
 cln::cl_RA power_of_ten(long e) { return cln::expt(cln::cl_RA(10), e); }
 
+// q * sqrt(r) with word-sized numerator, denominator and radicand, in x87 extended precision:
+// three roundings of 2^-64 each, so the double nearest to the result is the double nearest to
+// the value unless the result lies within that error of a midpoint between two doubles; then
+// nothing, and the certified long float decides.  A table row's decimal is written this way
+// some ten times faster.
+std::optional<double> word_sized_double(const cln::cl_I& radicand, const cln::cl_RA& coefficient) {
+    if (std::numeric_limits<long double>::digits < 64) return std::nullopt;
+    const cln::cl_I n = cln::numerator(coefficient), d = cln::denominator(coefficient);
+    if (cln::integer_length(n) > 62 || cln::integer_length(d) > 62 || cln::integer_length(radicand) > 62)
+        return std::nullopt;
+    long double y = static_cast<long double>(cln::cl_I_to_long(n));
+    if (radicand != 1) y *= std::sqrt(static_cast<long double>(cln::cl_I_to_long(radicand)));
+    y /= static_cast<long double>(cln::cl_I_to_long(d));
+    const double x = static_cast<double>(y);
+    if (static_cast<long double>(x) == y) return x;
+    const double neighbour =
+        std::nextafter(x, y > x ? std::numeric_limits<double>::infinity() : -std::numeric_limits<double>::infinity());
+    const long double midpoint = (static_cast<long double>(x) + static_cast<long double>(neighbour)) / 2;
+    if (std::fabs(y - midpoint) <= std::fabs(y) * std::ldexp(1.0L, -60)) return std::nullopt;
+    return x;
+}
+
 }  // namespace
 
 std::string number::to_string() const {
@@ -84,6 +108,8 @@ std::string number::to_string() const {
 
 double number::to_double() const {
     if (terms_.empty()) return 0.0;
+    if (terms_.size() == 1)
+        if (auto x = word_sized_double(terms_.begin()->first, terms_.begin()->second)) return *x;
     return cln::double_approx(accurate_float(terms_, 64));
 }
 

@@ -73,3 +73,20 @@ TEST_CASE("exact: to_double of a sum that nearly cancels is accurate", "[exact][
     CHECK(difference.to_double() == Approx(expected).epsilon(1e-6));
     CHECK(difference.to_decimal(5) == "1.5949e-12");
 }
+
+TEST_CASE("exact: to_double of one word-sized term is the double nearest to its 40-digit decimal",
+          "[exact][number][print]") {
+    // The extended-precision path against the exact decimal expansion (to_decimal works in
+    // integers), read back by strtod, which rounds to nearest (C standard, 7.22.1.3).
+    std::size_t differ = 0, checked = 0;
+    for (long r : {1L, 2L, 3L, 5L, 6L, 7L, 30L, 105L, 1155L, 4294967291L, 2305843009213693951L})
+        for (long p = -400; p <= 400; p += 7)
+            for (long q : {1L, 3L, 7L, 10L, 99L, 1024L, 999999937L}) {
+                if (p == 0) continue;
+                const number x = number::from_squarefree_term(ratio(p, q), r);
+                ++checked;
+                if (x.to_double() != std::strtod(x.to_decimal(40).c_str(), nullptr)) ++differ;
+            }
+    CHECK(checked > 5000);
+    CHECK(differ == 0);
+}
