@@ -141,7 +141,7 @@ TEST_CASE("shards joined with cat are the whole table", "[cli][table]") {
     }
 }
 
-TEST_CASE("--jobs 2 writes the same bytes as --jobs 1", "[cli][table]") {
+TEST_CASE("a table with --jobs 2 writes the same bytes as with --jobs 1", "[cli][table]") {
     const std::vector<std::string> base = {"table", "-e", sixj, "--for", "a, b, c, d, e, f = 0..5/2", "--allowed-only"};
     auto one = run_cli(base);
     auto two_args = base;
@@ -216,7 +216,7 @@ TEST_CASE("a table names what it needs: a range, a known name, a readable value"
     CHECK(no_let.err.find("no let named 'W'") != std::string::npos);
 }
 
-TEST_CASE("--of tabulates a let of a file, and a name without a range takes what its symbols allow", "[cli][table]") {
+TEST_CASE("a table of a let named by --of, where a name without a range takes what its symbols allow", "[cli][table]") {
     auto r = run_cli({"table", "--of", "W", "-", "--for", "j1, j2 = 1/2", "--allowed-only"},
                      "let W = <j1 m1, j2 m2 | J M>^2\nlet V = 1\n");
     REQUIRE(r.code == 0);
