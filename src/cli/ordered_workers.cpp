@@ -1,5 +1,6 @@
 #include "cli/ordered_workers.hpp"
 
+#include <fcntl.h>
 #include <signal.h>
 #include <sys/wait.h>
 #include <unistd.h>
@@ -97,17 +98,20 @@ void run_ordered(std::size_t blocks, std::size_t jobs, const std::function<void(
         return;
     }
     if (jobs > blocks) jobs = blocks;
+    // This process is worker 0 and writes the output between its own blocks; the others are
+    // forked.  A pipe holds a few blocks, so that a worker need not wait while this one computes.
     std::vector<worker> workers(jobs);
-    for (std::size_t w = 0; w < jobs; ++w) {
+    for (std::size_t w = 1; w < jobs; ++w) {
         int fds[2];
         if (::pipe(fds) != 0) {
             end_all(workers, true);
             throw worker_failure(std::string("cannot create a pipe for a worker: ") + std::strerror(errno));
         }
+        ::fcntl(fds[1], F_SETPIPE_SZ, 1 << 20);  // best effort: the system's limit may be lower
         const pid_t pid = ::fork();
         if (pid == 0) {
             ::close(fds[0]);
-            for (std::size_t v = 0; v < w; ++v) ::close(workers[v].fd);
+            for (std::size_t v = 1; v < w; ++v) ::close(workers[v].fd);
             work(w, blocks, jobs, fds[1], produce);
         }
         ::close(fds[1]);
@@ -119,6 +123,20 @@ void run_ordered(std::size_t blocks, std::size_t jobs, const std::function<void(
         workers[w] = {pid, fds[0]};
     }
     for (std::size_t b = 0; b < blocks; ++b) {
+        if (b % jobs == 0) {
+            std::string own;
+            try {
+                produce(b, own);
+            } catch (const std::exception& e) {
+                end_all(workers, true);
+                throw worker_failure(e.what());
+            }
+            if (!consume(b, own)) {
+                end_all(workers, true);
+                return;
+            }
+            continue;
+        }
         worker& w = workers[b % jobs];
         char head[9];
         std::uint64_t n = 0;

@@ -17,7 +17,8 @@ public:
 };
 
 // Block b is produced by worker b % jobs into a string, which `consume` receives in the order
-// b = 0, 1, ..., blocks - 1; a worker runs at most a pipe's buffer ahead of the reader.
+// b = 0, 1, ..., blocks - 1.  Worker 0 is this process; the others are forked and run at most
+// a pipe's buffer ahead of it.
 // `produce` may throw std::exception: its what() ends the run as a worker_failure.  With
 // jobs == 1 everything runs in this process.  consume returns false to stop early (the workers
 // are then ended).
