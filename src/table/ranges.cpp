@@ -92,8 +92,10 @@ private:
         long twice = 2 * *numerator;
         if (at_ < text_.size() && text_[at_] == '/') {
             ++at_;
+            const std::size_t denominator_at = at_;
             auto denominator = digits();
-            if (!denominator || *denominator == 0) throw user_error(at_, "expected a denominator after '/'");
+            if (!denominator) throw user_error(at_, "expected a denominator after '/'");
+            if (*denominator == 0) throw user_error(denominator_at, "a denominator of 0");
             if (twice % *denominator != 0)
                 throw user_error(start, "a quantum number is a multiple of 1/2; this value is not");
             twice /= *denominator;
