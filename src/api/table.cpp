@@ -50,6 +50,10 @@ const lowered_statement& tabulated(const program::parts& p, const table_options&
     if (found && found->kind == request_kind::check)
         throw as_input_error(
             p.source, user_error(found->span.begin, "a table needs an expression, and the last statement is a check"));
+    if (found && !found->at.empty())
+        throw as_input_error(p.source, user_error(found->at.front().offset,
+                                                  "a table takes its values from --for, not from 'at': write --for '" +
+                                                      found->at.front().name.get_name() + " = ...' instead"));
     if (found) return *found;
     throw request_error(o.of.empty() ? "the input has no expression to tabulate (write one, or name a let with --of)"
                                      : "the input has no let named '" + o.of + "'");
@@ -173,10 +177,10 @@ table::table(const program& p, const table_options& o) : state_(std::make_unique
         return ++s.total < cap;
     });
     const std::size_t begin = s.total * (o.shard - 1) / o.shards, end = s.total * o.shard / o.shards;
-    if (s.total >= cap || end - begin > o.max_rows)
-        throw fail("the table has " + std::string(s.total >= cap ? "more than " : "") + std::to_string(s.total) +
-                   " rows" + (o.shards > 1 ? " (this shard " + std::to_string(end - begin) + ")" : "") +
-                   ", above the limit of " + std::to_string(o.max_rows) +
+    // With at most max_rows * shards rows in all, no shard has more than max_rows.
+    if (s.total >= cap)
+        throw fail("the table has more than " + std::to_string(cap - 1) + " rows, above the limit of " +
+                   std::to_string(o.max_rows) +
                    " per shard: narrow the ranges, split it with --shard, or raise --max-rows");
     if (o.shards == 1) return;
     s.rows.reserve((end - begin) * s.columns.size());

@@ -211,6 +211,10 @@ TEST_CASE("a table names what it needs: a range, a known name, a readable value"
     CHECK(a_check.code == 2);
     CHECK(a_check.err.find("a table needs an expression") != std::string::npos);
 
+    auto fixed_by_at = run_cli({"table", "-e", "eval 6j{a,b,c;d,e,f} at a=1"});
+    CHECK(fixed_by_at.code == 2);
+    CHECK(fixed_by_at.err.find("not from 'at': write --for 'a = ...' instead") != std::string::npos);
+
     auto no_let = run_cli({"table", "--of", "W", "-e", "let V = 6j{a,b,c;d,e,f}"});
     CHECK(no_let.code == 2);
     CHECK(no_let.err.find("no let named 'W'") != std::string::npos);
