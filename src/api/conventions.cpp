@@ -30,6 +30,14 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
   <j1 m1, j2 m2 | J M>         (-1)^(EXPR)  sqrt(EXPR)  delta(x, y)  tri(a, b, c)
   proj(j, m)                   1 when m is one of -j..j (m a projection of j), else 0
   sum(i, k : EXPR)             + - * / ^ and parentheses; numbers like 3 and 1/2
+  <(j1, j2) j12, j3; J | j1, (j2, j3) j23; J>
+                               recoupling coefficient: two coupling trees (a name, or
+                               (tree, tree) label) coupled to J on each side, the same leaves;
+                               the sum over all projections of the CG coefficients building both
+                               states (left part first), divided by 2J+1.  At most 12 leaves: the
+                               definition, which check and eval use, sums over 2n-1 projections.
+                               simplify reduces it by the fewest sums, then 6j/9j (exact search up
+                               to 8 leaves, a constructed path beyond when the search runs long).
 
 Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
 collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product

@@ -27,20 +27,24 @@ bool is_polynomial(const ex& e) {
     return false;
 }
 
-ex replaced(const ex& e, const ex& target, const ex& by) {
-    if (e.is_equal(target)) return by;
+ex rewritten(const ex& e, const std::function<std::optional<ex>(const ex&)>& at) {
+    if (std::optional<ex> by = at(e)) return *by;
     if (is_a<index_sum>(e)) {
         const auto& s = ex_to<index_sum>(e);
-        return make_sum(replaced(s.body(), target, by), s.indices());
+        return make_sum(rewritten(s.body(), at), s.indices());
     }
     if (is_a<add>(e) || is_a<mul>(e) || is_a<power>(e)) {
         exvector ops;
-        for (const ex& o : e) ops.push_back(replaced(o, target, by));
+        for (const ex& o : e) ops.push_back(rewritten(o, at));
         if (is_a<add>(e)) return add(ops);
         if (is_a<mul>(e)) return mul(ops);
         return pow(ops[0], ops[1]);
     }
     return e;
+}
+
+ex replaced(const ex& e, const ex& target, const ex& by) {
+    return rewritten(e, [&](const ex& x) { return x.is_equal(target) ? std::optional<ex>(by) : std::nullopt; });
 }
 
 bool is_linear_form(const ex& e) {

@@ -23,13 +23,15 @@ struct identifier;
 struct call;
 struct bracket_symbol;
 struct clebsch_gordan;
+struct recoupling;
 struct sum;
 struct negated;
 struct expression;
 
-struct operand : x3::variant<nil, x3::forward_ast<number>, x3::forward_ast<identifier>, x3::forward_ast<call>,
-                             x3::forward_ast<bracket_symbol>, x3::forward_ast<clebsch_gordan>, x3::forward_ast<sum>,
-                             x3::forward_ast<negated>, x3::forward_ast<expression>> {
+struct operand
+    : x3::variant<nil, x3::forward_ast<number>, x3::forward_ast<identifier>, x3::forward_ast<call>,
+                  x3::forward_ast<bracket_symbol>, x3::forward_ast<clebsch_gordan>, x3::forward_ast<recoupling>,
+                  x3::forward_ast<sum>, x3::forward_ast<negated>, x3::forward_ast<expression>> {
     using base_type::base_type;
     using base_type::operator=;
 };
@@ -75,6 +77,29 @@ struct bracket_symbol : located {
 // <j1 m1, j2 m2 | J M>
 struct clebsch_gordan : located {
     operand j1, m1, j2, m2, j, m;
+};
+
+// A coupling tree: a leaf (a name) or two trees coupled to a label, `(tree, tree) label`.
+struct coupled_pair;
+struct coupling_tree : x3::variant<identifier, x3::forward_ast<coupled_pair>> {
+    using base_type::base_type;
+    using base_type::operator=;
+};
+
+struct coupled_pair : located {
+    coupling_tree left, right;
+    operand label;
+};
+
+// One side of a recoupling coefficient: `tree, tree; J`.
+struct coupling_side : located {
+    coupling_tree left, right;
+    operand total;
+};
+
+// <(j1, j2) j12, j3; J | j1, (j2, j3) j23; J>
+struct recoupling : located {
+    coupling_side bra, ket;
 };
 
 struct sum : located {

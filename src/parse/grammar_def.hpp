@@ -44,6 +44,10 @@ COUPLET_RULE(cg_number, ast::expression, "number")
 COUPLET_RULE(number_operand, ast::operand, "number")
 COUPLET_RULE(cg_divisor, ast::operation, "number")
 COUPLET_RULE(clebsch_gordan, ast::clebsch_gordan, "Clebsch-Gordan symbol")
+COUPLET_RULE(coupling_tree, ast::coupling_tree, "coupling tree")
+COUPLET_RULE(coupled_pair, ast::coupled_pair, "coupling tree")
+COUPLET_RULE(coupling_side, ast::coupling_side, "coupled state")
+COUPLET_RULE(recoupling, ast::recoupling, "recoupling coefficient")
 COUPLET_RULE(index_list, std::vector<ast::identifier>, "summation index")
 COUPLET_RULE(sum, ast::sum, "sum")
 COUPLET_RULE(name_list, std::vector<ast::identifier>, "name")
@@ -83,7 +87,7 @@ auto const negated_def = lit('-') > unary;
 // The exponent is a unary, so a^b^c groups as a^(b^c) and a^-b is accepted.
 auto const power_def = primary >> *(char_('^') > unary);
 auto const primary_def =
-    round_symbol | curly_symbol | clebsch_gordan | sum | number | call | identifier | parenthesized;
+    round_symbol | curly_symbol | recoupling | clebsch_gordan | sum | number | call | identifier | parenthesized;
 auto const parenthesized_def = lit('(') > expression > ')';
 
 auto const args_def = expression % ',';
@@ -101,6 +105,13 @@ auto const cg_divisor_def = char_('/') > number_operand;
 auto const cg_number_def = number_operand >> x3::repeat(0, 1)[cg_divisor];
 auto const cg_atom_def = cg_negated | cg_number | identifier | parenthesized;
 auto const clebsch_gordan_def = lit('<') > cg_atom > cg_atom > ',' > cg_atom > cg_atom > '|' > cg_atom > cg_atom > '>';
+
+// <tree, tree; J | tree, tree; J>.  Up to the ';' of the first side every step may fail
+// without an error, so that a Clebsch-Gordan symbol, which also opens with '<', is tried next.
+auto const coupling_tree_def = coupled_pair | identifier;
+auto const coupled_pair_def = lit('(') >> coupling_tree >> ',' >> coupling_tree >> ')' >> cg_atom;
+auto const coupling_side_def = coupling_tree >> ',' >> coupling_tree >> ';' > cg_atom;
+auto const recoupling_def = lit('<') >> coupling_side > '|' > coupling_side > '>';
 
 auto const index_list_def = identifier % ',';
 auto const sum_def = kw("sum") > '(' > index_list > ':' > expression > ')';
@@ -123,9 +134,9 @@ auto const statement_rule_def = (declaration | definition | check_request | eval
 
 BOOST_SPIRIT_DEFINE(identifier, name_text, number, expression, multiplicative, power, unary, negated, primary,
                     parenthesized, args, call, row, rows, round_symbol, curly_symbol, cg_atom, cg_negated, cg_number,
-                    number_operand, cg_divisor, clebsch_gordan, index_list, sum, name_list, declaration, definition,
-                    check_request, assignment, assignment_list, eval_request, simplify_request, bare_check, bare_eval,
-                    bare_expression, end_of_statement)
+                    number_operand, cg_divisor, clebsch_gordan, coupling_tree, coupled_pair, coupling_side, recoupling,
+                    index_list, sum, name_list, declaration, definition, check_request, assignment, assignment_list,
+                    eval_request, simplify_request, bare_check, bare_eval, bare_expression, end_of_statement)
 BOOST_SPIRIT_DEFINE(statement_rule)
 
 }  // namespace couplet::parser

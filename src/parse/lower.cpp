@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <boost/variant/apply_visitor.hpp>
+#include <boost/variant/get.hpp>
 #include <cctype>
 #include <functional>
 #include <map>
@@ -10,6 +11,7 @@
 #include <set>
 #include <sstream>
 
+#include "model/coupling_tree.hpp"
 #include "model/rewrite.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
@@ -63,6 +65,12 @@ public:
         s.text = src_.text().substr(p.span.begin, p.span.end - p.span.begin);
         while (!s.text.empty() && std::isspace(static_cast<unsigned char>(s.text.back()))) s.text.pop_back();
         boost::apply_visitor([&](const auto& node) { this->fill(s, node); }, p.tree);
+        s.written = s.value;
+        if (s.kind != request_kind::declaration) {
+            projections_of_statement_.clear();
+            s.value = with_definitions(s.value, p.span.begin);
+            s.rhs = with_definitions(s.rhs, p.span.begin);
+        }
         return s;
     }
 
@@ -378,6 +386,113 @@ private:
         return clebsch(j1, m1, j2, m2, j, m);
     }
 
+    // ---- recoupling coefficients ---------------------------------------------------------
+
+    // <bra; J | ket; J> is held whole (the simplifier reduces it by its trees); every other
+    // use takes its definition, with_definitions below.
+    ex node(const ast::recoupling& r) {
+        coupling_tree bra = side(r.bra), ket = side(r.ket);
+        if (!bra.label.is_equal(ket.label))
+            throw user_error(offset_of(r.ket.total),
+                             "both sides of a recoupling coefficient couple to the same total; found " +
+                                 couplet::to_text(bra.label) + " on the left and " + couplet::to_text(ket.label) +
+                                 " on the right");
+        const auto bra_leaves = leaves_of(bra), ket_leaves = leaves_of(ket);
+        if (bra_leaves.size() > max_coupled_leaves)
+            throw user_error(r.offset, "a recoupling coefficient couples at most " +
+                                           std::to_string(max_coupled_leaves) + " angular momenta; this one couples " +
+                                           std::to_string(bra_leaves.size()));
+        refuse_repeated_leaves(bra_leaves);
+        refuse_repeated_leaves(ket_leaves);
+        refuse_unmatched_leaves(bra_leaves, ket_leaves, "left");
+        refuse_unmatched_leaves(ket_leaves, bra_leaves, "right");
+        return recoupling(as_held_tree(bra), as_held_tree(ket));
+    }
+
+    // Each recoupling coefficient replaced by its definition (model/coupling_tree.hpp), over
+    // projections named after what they project: m + the leaf's or label's name (mj1, mJ),
+    // primed on the right side and until the name is new to the input and to the statement.
+    ex with_definitions(const ex& e, std::size_t offset) {
+        return rewritten(e, [&](const ex& part) {
+            return is_recoupling(part) ? std::optional<ex>(definition_of(part, offset)) : std::nullopt;
+        });
+    }
+
+    ex definition_of(const ex& held, std::size_t offset) {
+        return recoupling_definition(
+            tree_from_held(held.op(0)), tree_from_held(held.op(1)),
+            [&](const ex& label, bool ket_side) { return new_projection(label, ket_side ? "'" : "", offset); });
+    }
+
+    coupling_tree side(const ast::coupling_side& s) {
+        coupling_tree out;
+        out.offset = s.offset;
+        out.parts = {tree(s.left), tree(s.right)};
+        out.label = slot(s.total, qn_role::angular);
+        return out;
+    }
+
+    coupling_tree tree(const ast::coupling_tree& t) {
+        coupling_tree out;
+        if (const auto* leaf = boost::get<ast::identifier>(&t.get())) {
+            out.offset = leaf->offset;
+            out.label = slot(ast::operand(*leaf), qn_role::angular);
+            return out;
+        }
+        const ast::coupled_pair& pair = boost::get<ast::x3::forward_ast<ast::coupled_pair>>(t.get()).get();
+        out.offset = pair.offset;
+        out.parts = {tree(pair.left), tree(pair.right)};
+        out.label = slot(pair.label, qn_role::angular);
+        return out;
+    }
+
+    static void refuse_repeated_leaves(const std::vector<const coupling_tree*>& leaves) {
+        std::set<std::string> seen;
+        for (const coupling_tree* leaf : leaves)
+            if (!seen.insert(couplet::to_text(leaf->label)).second)
+                throw user_error(leaf->offset, "'" + couplet::to_text(leaf->label) +
+                                                   "' is coupled twice on this side of the recoupling coefficient");
+    }
+
+    static void refuse_unmatched_leaves(const std::vector<const coupling_tree*>& these,
+                                        const std::vector<const coupling_tree*>& others, const char* side_name) {
+        for (const coupling_tree* leaf : these) {
+            const bool matched = std::any_of(others.begin(), others.end(), [&](const coupling_tree* other) {
+                return other->label.is_equal(leaf->label);
+            });
+            if (!matched)
+                throw user_error(leaf->offset, "'" + couplet::to_text(leaf->label) + "' is coupled on the " +
+                                                   side_name +
+                                                   " side only; both sides of a recoupling coefficient couple "
+                                                   "the same angular momenta");
+        }
+    }
+
+    // A name generated for an earlier statement is reused: the projections are summed over.
+    ex new_projection(const ex& label, const std::string& mark, std::size_t offset) {
+        std::string name = "m" + (is_a<symbol>(label) ? ex_to<symbol>(label).get_name() : std::string("u")) + mark;
+        while (words_of_input().count(name) || projections_of_statement_.count(name) ||
+               (out_.numbers.find(name) && !generated_projections_.count(name)))
+            name += "'";
+        projections_of_statement_.insert(name);
+        generated_projections_.insert(name);
+        const symbol m = out_.numbers.symbol_for(name, offset);
+        out_.numbers.assign_role(m, qn_role::projection, offset);
+        out_.numbers.set_owner_if_unset(m, label);
+        return m;
+    }
+
+    const std::set<std::string>& words_of_input() {
+        if (!input_words_) {
+            input_words_.emplace();
+            static const std::regex word("[A-Za-z_][A-Za-z0-9_]*'*");
+            const std::string& text = src_.text();
+            for (auto it = std::sregex_iterator(text.begin(), text.end(), word); it != std::sregex_iterator(); ++it)
+                input_words_->insert(it->str());
+        }
+        return *input_words_;
+    }
+
     ex node(const ast::sum& s) {
         lst indices;
         for (const ast::identifier& i : s.indices) {
@@ -454,6 +569,8 @@ private:
     // each let's definition.
     std::set<std::string> written_;
     std::map<std::string, std::set<std::string>> names_written_in_;
+    std::optional<std::set<std::string>> input_words_;  // every name-like word of the source
+    std::set<std::string> generated_projections_, projections_of_statement_;
 };
 
 }  // namespace

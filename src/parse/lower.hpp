@@ -34,6 +34,7 @@ struct lowered_statement {
     bool bare = false;                 // an expression or `A == B` without a keyword
     std::string name;                  // definition: the name it defines
     GiNaC::ex value;                   // simplify / eval / check left side / definition value
+    GiNaC::ex written;                 // value with its recoupling coefficients held whole
     GiNaC::ex rhs;                     // check right side
     std::vector<value_assignment> at;  // eval ... at
 };

@@ -112,6 +112,11 @@ protected:
                 level::atom};
     }
 
+    // Edmonds' layout (ch. 6): the two coupled states in one angle bracket.
+    recoupling_layout recoupling_brackets() override {
+        return {"\\left\\langle ", " \\,\\middle|\\, ", " \\right\\rangle", "\\, "};
+    }
+
     printed sum_over(const ex& s) override {
         return {summation(s) + " " + at_least(ex_to<index_sum>(s).body(), level::product), level::product};
     }

@@ -58,6 +58,8 @@ protected:
                 level::atom};
     }
 
+    recoupling_layout recoupling_brackets() override { return {"<", " | ", ">", " "}; }
+
     printed sum_over(const ex& s) override {
         const auto& is = ex_to<index_sum>(s);
         std::string out = "sum(";

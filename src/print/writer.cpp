@@ -4,6 +4,7 @@
 #include <sstream>
 #include <tuple>
 
+#include "model/coupling_tree.hpp"
 #include "model/readable_order.hpp"
 #include "model/symbols.hpp"
 #include "print/print.hpp"
@@ -141,9 +142,24 @@ printed writer::write(const ex& e) {
     if (is_a<phase_factor>(e)) return phase(e.op(0));
     if (is_a<index_sum>(e)) return sum_over(e);
     if (kind_of(e) != symbol_kind::none) return function(e);
+    if (is_recoupling(e)) return recoupling(e);
     std::ostringstream os;  // not produced by couplet's own lowering; shown as GiNaC has it
     os << e;
     return {os.str(), level::atom};
+}
+
+printed writer::recoupling(const ex& e) {
+    const recoupling_layout layout = recoupling_brackets();
+    auto side = [&](const ex& held) {
+        return coupled(held.op(0), layout) + ", " + coupled(held.op(1), layout) + "; " + write(held.op(2)).text;
+    };
+    return {layout.open + side(e.op(0)) + layout.bar + side(e.op(1)) + layout.close, level::atom};
+}
+
+std::string writer::coupled(const ex& held, const recoupling_layout& layout) {
+    if (!is_a<lst>(held)) return write(held).text;
+    return "(" + coupled(held.op(0), layout) + ", " + coupled(held.op(1), layout) + ")" + layout.label_gap +
+           at_least(held.op(2), level::atom);
 }
 
 std::string writer::at_least(const ex& e, level needed) {

@@ -47,8 +47,16 @@ protected:
     virtual printed phase(const GiNaC::ex& exponent) = 0;
     virtual printed function(const GiNaC::ex& f) = 0;
     virtual printed sum_over(const GiNaC::ex& s) = 0;
+    // <(j1, j2) j12, j3; J | j1, (j2, j3) j23; J>: the brackets, the bar, and what stands
+    // between a coupling's parentheses and its label.
+    struct recoupling_layout {
+        std::string open, bar, close, label_gap;
+    };
+    virtual recoupling_layout recoupling_brackets() = 0;
 
 private:
+    printed recoupling(const GiNaC::ex& e);
+    std::string coupled(const GiNaC::ex& held, const recoupling_layout& layout);
     printed sum(const GiNaC::ex& e);
     printed product(const GiNaC::ex& e);
     std::string join_factors(const std::vector<GiNaC::ex>& factors, const GiNaC::numeric& coefficient);

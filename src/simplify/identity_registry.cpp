@@ -1,5 +1,6 @@
 #include "simplify/identity_registry.hpp"
 
+#include "coupling/rewrites.hpp"
 #include "network/move.hpp"
 #include "network/rewrites.hpp"
 #include "rules/rewrites.hpp"
@@ -16,6 +17,12 @@ const std::vector<const identity*>& all_identities() {
         for (const network::move& m : network::network_moves()) out.push_back(&m);
         out.push_back(&network::interchange_move());
         for (const identity* code : {
+                 // recoupling stage
+                 &coupling::three_angular_momenta_identity(),
+                 &coupling::two_pairs_identity(),
+                 &coupling::exchanged_parts_identity(),
+                 &coupling::orthonormal_states_identity(),
+                 &coupling::recoupling_by_trees_identity(),
                  // m-sum stage
                  &network::completeness_identity(),
                  &network::projection_delta_identity(),

@@ -4,6 +4,7 @@
 
 #include "canonical/phase_reduction.hpp"
 #include "canonical/symmetries.hpp"
+#include "coupling/recoupling_stage.hpp"
 #include "limits/run_limits.hpp"
 #include "model/normalize.hpp"
 #include "model/result_shape.hpp"
@@ -62,7 +63,7 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
 // phases are reduced after the symmetries have produced theirs.
 simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& numbers) {
     std::vector<simplification_step> steps_taken;
-    GiNaC::ex x = normalize(e);
+    GiNaC::ex x = normalize(coupling::reduce_recouplings(e, numbers, &steps_taken));
     const bool has_clebsch =
         x.has(clebsch(GiNaC::wild(0), GiNaC::wild(1), GiNaC::wild(2), GiNaC::wild(3), GiNaC::wild(4), GiNaC::wild(5)));
     const ex written = x;
