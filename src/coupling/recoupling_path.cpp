@@ -62,6 +62,7 @@ recoupling_cost lower_bound(const state& s, const tree_shape& to) {
 
 struct visit {
     recoupling_cost cost;
+    bool expanded = false;
     std::string parent_key;
     recoupling_step step;
     state at;
@@ -85,13 +86,6 @@ recoupling_cost take_step(state& s, const recoupling_step& step) {
     return cost;
 }
 
-leaf_set parent_of(const tree_shape& shape, leaf_set s) {
-    leaf_set best = 0;
-    for (leaf_set c : shape.couplings)
-        if (c != s && (c & s) == s && (best == 0 || __builtin_popcount(c) < __builtin_popcount(best))) best = c;
-    return best;
-}
-
 }  // namespace
 
 recoupling_path constructed_recoupling(const tree_shape& from, const tree_shape& to) {
@@ -108,10 +102,10 @@ recoupling_path constructed_recoupling(const tree_shape& from, const tree_shape&
         // steps at a grandparent: ((x s) u, c) w -> (x, (s c)) w, or, where c is the other
         // part, -> (s, (x c)) w, which builds the coupling.
         while (!current.shape.has(target)) {
-            const bool p_raised = (parent_of(current.shape, p) & target) == target;
+            const bool p_raised = (current.shape.parent_of(p) & target) == target;
             const leaf_set part = p_raised ? q : p, other = p_raised ? p : q;
-            const leaf_set up = parent_of(current.shape, part);
-            const leaf_set grand = parent_of(current.shape, up);
+            const leaf_set up = current.shape.parent_of(part);
+            const leaf_set grand = current.shape.parent_of(up);
             const leaf_set sibling = static_cast<leaf_set>(up & ~part);
             const leaf_set uncle = static_cast<leaf_set>(grand & ~up);
             const leaf_set added = static_cast<leaf_set>((uncle == other ? part : sibling) | uncle);
@@ -132,11 +126,10 @@ recoupling_path cheapest_recoupling(const tree_shape& from, const tree_shape& to
     };
     std::priority_queue<entry, std::vector<entry>, decltype(later)> queue(later);
     std::unordered_map<std::string, visit> seen;
-    std::unordered_map<std::string, bool> done;
 
     const state start{from, from.couplings};
     const std::string start_key = key_of(start);
-    seen[start_key] = {{}, "", {}, start};
+    seen[start_key] = {{}, false, "", {}, start};
     std::size_t order = 0;
     auto estimate = [&](const state& s) { return options.use_lower_bound ? lower_bound(s, to) : recoupling_cost{}; };
     queue.emplace(estimate(start), recoupling_cost{}, order++, start_key);
@@ -144,9 +137,9 @@ recoupling_path cheapest_recoupling(const tree_shape& from, const tree_shape& to
     while (!queue.empty()) {
         auto [f, g, ignored, key] = queue.top();
         queue.pop();
-        if (done[key]) continue;
-        done[key] = true;
-        const visit& here = seen.at(key);
+        visit& here = seen.at(key);
+        if (here.expanded) continue;
+        here.expanded = true;
         if (here.at.shape == to) {
             recoupling_path path;
             path.cost = g;
@@ -165,7 +158,7 @@ recoupling_path cheapest_recoupling(const tree_shape& from, const tree_shape& to
             const std::string next_key = key_of(next);
             auto found = seen.find(next_key);
             if (found != seen.end() && !(cost < found->second.cost)) continue;
-            seen[next_key] = {cost, key, step, next};
+            seen[next_key] = {cost, found != seen.end() && found->second.expanded, key, step, next};
             queue.emplace(cost + estimate(next), cost, order++, next_key);
         }
     }

@@ -17,6 +17,13 @@ std::pair<leaf_set, leaf_set> tree_shape::parts_of(leaf_set s) const {
     return part < other ? std::make_pair(part, other) : std::make_pair(other, part);
 }
 
+leaf_set tree_shape::parent_of(leaf_set s) const {
+    leaf_set best = 0;
+    for (leaf_set c : couplings)
+        if (c != s && (c & s) == s && (best == 0 || __builtin_popcount(c) < __builtin_popcount(best))) best = c;
+    return best;
+}
+
 tree_shape tree_shape::replaced(leaf_set removed, leaf_set added) const {
     tree_shape out = *this;
     auto it = std::lower_bound(out.couplings.begin(), out.couplings.end(), removed);

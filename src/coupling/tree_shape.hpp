@@ -20,6 +20,8 @@ struct tree_shape {
     // The two parts that the coupling `s` joins (each a coupling or a single leaf), smaller
     // mask first.
     std::pair<leaf_set, leaf_set> parts_of(leaf_set s) const;
+    // The smallest coupling that holds `s` (a coupling or a leaf) as one of its parts.
+    leaf_set parent_of(leaf_set s) const;
     // The shape with `removed` replaced by `added`.
     tree_shape replaced(leaf_set removed, leaf_set added) const;
 
