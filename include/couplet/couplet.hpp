@@ -61,10 +61,13 @@ enum class statement_kind { simplify, check, eval, definition, declaration };
 // One statement of the input, as read.
 struct statement {
     statement_kind kind = statement_kind::simplify;
-    std::string text;                                        // its source text
-    std::string name;                                        // a definition's name (`let NAME = ...`)
-    GiNaC::ex value;                                         // the expression; a check's left side
-    GiNaC::ex rhs;                                           // a check's right side
+    std::string text;  // its source text
+    std::string name;  // a definition's name (`let NAME = ...`)
+    GiNaC::ex value;   // the expression; a check's left side
+    GiNaC::ex rhs;     // a check's right side
+    // value and rhs as written: a recoupling coefficient held whole, not yet replaced by its
+    // Clebsch-Gordan definition.  The printers show these; eval and check compute with value.
+    GiNaC::ex written, written_rhs;
     std::vector<std::pair<std::string, GiNaC::numeric>> at;  // eval ... at NAME=VALUE
     std::size_t offset = 0, end = 0;                         // where it starts and ends in the input (bytes)
     std::size_t line = 1, column = 1;                        // where it starts, as messages count

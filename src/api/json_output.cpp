@@ -82,7 +82,7 @@ json simplify_json(const result& r) {
            {"input", r.source.text},
            {"result", to_text(r.answer)},
            {"latex", to_latex(r.answer)},
-           {"input_latex", to_latex(r.source.value)},
+           {"input_latex", to_latex(r.source.written)},
            {"verified", r.checked.verified},
            {"points", r.checked.points}};
     if (r.checked.verified) {
@@ -113,7 +113,7 @@ json kind_record(const result& r) {
                         {"exact", r.value->exact},
                         {"decimal", r.value->decimal},
                         {"latex", r.value->latex},
-                        {"input_latex", to_latex(r.source.value)}};
+                        {"input_latex", to_latex(r.source.written)}};
         case statement_kind::check: {
             json j{{"kind", "check"}, {"input", r.source.text}, {"latex", to_latex(r)}, {"result", to_text(r)}};
             if (r.check) {

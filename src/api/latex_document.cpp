@@ -103,10 +103,10 @@ void latex_document::statement(const source_file& src, const result& r) {
     switch (r.done) {
         case statement_kind::definition: {
             display_formula f;
-            f.sides = {raw(latex_identifier(s.name)), side(s.value)};
+            f.sides = {raw(latex_identifier(s.name)), side(s.written)};
             f.relations = {"="};
             display(f);
-            names_.emplace_back(s.value, GiNaC::symbol(s.name));
+            names_.emplace_back(s.written, GiNaC::symbol(s.name));
             return;
         }
         case statement_kind::simplify:
@@ -124,7 +124,7 @@ void latex_document::simplification(const result& r) {
     const couplet::statement& s = r.source;
     if (document_ && r.steps && !r.steps->empty()) {
         display_formula input;
-        input.sides = {side(s.value)};
+        input.sides = {side(s.written)};
         input.tag = "input";
         display(input);
         steps(*r.steps);
@@ -136,8 +136,8 @@ void latex_document::simplification(const result& r) {
         return;
     }
     display_formula f;
-    f.sides = {side(s.value)};
-    if (!r.answer.is_equal(s.value)) {
+    f.sides = {side(s.written)};
+    if (!r.answer.is_equal(s.written)) {
         f.sides.push_back(side(r.answer));
         f.relations = {"="};
     }
@@ -163,7 +163,7 @@ void latex_document::steps(const std::vector<step>& steps) {
 void latex_document::evaluation(const result& r) {
     const couplet::statement& s = r.source;
     display_formula f;
-    f.sides = {side(s.value), raw(r.value->latex)};
+    f.sides = {side(s.written), raw(r.value->latex)};
     f.relations = {"="};
     if (!r.value->rational) {
         f.sides.push_back(raw(r.value->decimal));
@@ -189,7 +189,7 @@ std::string repair_site_latex(const std::optional<check_record::summand_site>& s
 void latex_document::check(const result& res) {
     const couplet::statement& s = res.source;
     display_formula f;
-    f.sides = {side(s.value), side(s.rhs)};
+    f.sides = {side(s.written), side(s.written_rhs)};
     if (!res.check) {  // an internal conflict: the message on standard error says what happened
         f.relations = {"\\overset{?}{=}"};
         f.notes = {"\\quad" + words("(internal check failed)")};

@@ -26,6 +26,8 @@ statement public_view(const source_file& src, const lowered_statement& s) {
     out.name = s.name;
     out.value = s.value;
     out.rhs = s.rhs;
+    out.written = s.written;
+    out.written_rhs = s.written_rhs;
     for (const value_assignment& a : s.at) out.at.emplace_back(a.name.get_name(), a.value);
     out.offset = s.span.begin;
     out.end = s.span.end;

@@ -44,7 +44,7 @@ std::string to_latex(const result& r) {
                                    : r.check->result == verdict::holds     ? " = "
                                    : r.check->result == verdict::undecided ? " \\overset{?}{=} "
                                                                            : " \\neq ";
-            return to_latex(r.source.value) + relation + to_latex(r.source.rhs);
+            return to_latex(r.source.written) + relation + to_latex(r.source.written_rhs);
         }
         case statement_kind::simplify:
             return to_latex(r.answer);

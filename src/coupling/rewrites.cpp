@@ -77,9 +77,8 @@ const identity& orthonormal_states_identity() {
 
 const identity& recoupling_by_trees_identity() {
     static const identity id = make_identity(
-        "recoupling by coupling trees",
-        "Edmonds (1957) eqs. 6.1.5 and 6.4.2 applied in turn, the parts of couplings exchanged by 3.5.14",
-        [](pattern_table& p, ex& left, ex& right) {
+        // Short: the reference is the tag of a LaTeX derivation step, beside the formula.
+        "recoupling", "Edmonds (1957) eqs. 6.1.5, 6.4.2, 3.5.14", [](pattern_table& p, ex& left, ex& right) {
             auto [a, b, c, d, e, f, J, h, k] = p.angulars({"a", "b", "c", "d", "e", "f", "J", "h", "k"});
             left = defined(p, coupled(coupled(coupled(leaf(a), leaf(b), e), leaf(c), f), leaf(d), J),
                            coupled(leaf(a), coupled(leaf(b), coupled(leaf(c), leaf(d), h), k), J));

@@ -66,6 +66,7 @@ public:
         while (!s.text.empty() && std::isspace(static_cast<unsigned char>(s.text.back()))) s.text.pop_back();
         boost::apply_visitor([&](const auto& node) { this->fill(s, node); }, p.tree);
         s.written = s.value;
+        s.written_rhs = s.rhs;
         if (s.kind != request_kind::declaration) {
             projections_of_statement_.clear();
             s.value = with_definitions(s.value, p.span.begin);

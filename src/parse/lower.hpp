@@ -36,6 +36,7 @@ struct lowered_statement {
     GiNaC::ex value;                   // simplify / eval / check left side / definition value
     GiNaC::ex written;                 // value with its recoupling coefficients held whole
     GiNaC::ex rhs;                     // check right side
+    GiNaC::ex written_rhs;             // rhs with its recoupling coefficients held whole
     std::vector<value_assignment> at;  // eval ... at
 };
 

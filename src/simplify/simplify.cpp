@@ -64,6 +64,8 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
 simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& numbers) {
     std::vector<simplification_step> steps_taken;
     GiNaC::ex x = normalize(coupling::reduce_recouplings(e, numbers, &steps_taken));
+    const bool recoupled = !steps_taken.empty();
+    const ex recoupling_formula = x;
     const bool has_clebsch =
         x.has(clebsch(GiNaC::wild(0), GiNaC::wild(1), GiNaC::wild(2), GiNaC::wild(3), GiNaC::wild(4), GiNaC::wild(5)));
     const ex written = x;
@@ -104,6 +106,12 @@ simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& nu
         const ex input = canonical_form_of_arranged(arranged, numbers);
         steps_taken.push_back(step_by(input_form_identity(), x, input));
         x = input;
+    }
+    // A 6j or 9j that a recoupling formula made reads as the textbook lays it out (rows the
+    // bra's couplings, as in Edmonds 6.4.2), not in the canonical arrangement.
+    if (recoupled) {
+        const ex laid_out = merge_phases(in_written_arrangement(x, recoupling_formula));
+        if (!laid_out.is_equal(x)) x = merge_phases(reduce_phases(laid_out, numbers));
     }
     return {x, std::move(steps_taken)};
 }

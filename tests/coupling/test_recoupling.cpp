@@ -84,6 +84,31 @@ TEST_CASE("LS to jj coupling of two electrons is one 9j", "[coupling][cli]") {
     CHECK(r.out.rfind("1", 0) == 0);
 }
 
+TEST_CASE("a 9j or 6j that recoupling makes is printed in the textbook's layout", "[coupling][cli]") {
+    // Edmonds (1957) eq. 6.4.2: the 9j's rows are the left side's couplings (l1 s1 j1), (l2 s2
+    // j2), then the totals (L S J); eq. 6.1.5: {j12 j3 j123; j4 J j34} for ((12)3)4 -> (12)(34).
+    auto nine = simplify_and_compare("", "<(l1, s1) j1, (l2, s2) j2; J | (l1, l2) L, (s1, s2) S; J>");
+    require_exact(nine);
+    CHECK(nine.text.find("9j{l1, s1, j1; l2, s2, j2; L, S, J}") != std::string::npos);
+    auto six = simplify_and_compare("", "<((j1, j2) j12, j3) j123, j4; J | (j1, j2) j12, (j3, j4) j34; J>");
+    require_exact(six);
+    CHECK(six.text.find("6j{j12, j3, j123; j4, J, j34}") != std::string::npos);
+}
+
+TEST_CASE("latex and JSON show a recoupling coefficient as the bracket it was written as", "[coupling][cli]") {
+    // The overlap notation <T1; J | T2; J> (Edmonds 1957, ch. 6), not its Clebsch-Gordan sum.
+    const std::string coefficient = "<(j1, j2) j12, j3; J | j1, (j2, j3) j23; J>";
+    auto doc = testing::run_cli({"latex", "--steps", "-e", "let W = " + coefficient + "; W"});
+    INFO(doc.out << doc.err);
+    CHECK(doc.code == 0);
+    CHECK(doc.out.find("W = \\left\\langle (j_{1}, j_{2})\\, j_{12}") != std::string::npos);
+    CHECK(doc.out.find("\\sum") == std::string::npos);
+    auto json = testing::run_cli({"simplify", "--format", "json", "-e", coefficient});
+    INFO(json.out);
+    CHECK(json.out.find("\\middle|") != std::string::npos);
+    CHECK(json.out.find("\\sum") == std::string::npos);
+}
+
 TEST_CASE("a sum over an intermediate label of two recouplings is their composition", "[coupling][cli]") {
     // Completeness of the coupled states |(j1, (j2, j3) y); J> (common practice, no source).
     auto s = simplify_and_compare(
