@@ -42,6 +42,7 @@ int main(int argc, char** argv) {
         std::vector<double> search_ms, simplify_ms;
         double sums = 0, sixj = 0, ninej = 0;
         int above_minimum = 0, gave_up = 0, compared = 0;
+        std::string slowest;
         for (int k = 0; k < pairs; ++k) {
             const std::string text = testing::random_recoupling_text(n, rng);
             const lowered_program p = read_program(source_file("<bench>", text));
@@ -73,6 +74,7 @@ int main(int argc, char** argv) {
             t0 = std::clock();
             simplify_expression(held, p.numbers);
             simplify_ms.push_back(ms_since(t0));
+            if (simplify_ms.back() >= *std::max_element(simplify_ms.begin(), simplify_ms.end())) slowest = text;
         }
         const double done = pairs;
         char exhaustive[32] = "-";
@@ -81,6 +83,7 @@ int main(int argc, char** argv) {
                     *std::max_element(search_ms.begin(), search_ms.end()), median(simplify_ms),
                     simplify_ms.empty() ? 0.0 : *std::max_element(simplify_ms.begin(), simplify_ms.end()),
                     done ? sums / done : 0, done ? sixj / done : 0, done ? ninej / done : 0, exhaustive, gave_up);
+        std::fprintf(stderr, "n = %d, slowest simplification: %s\n", n, slowest.c_str());
         std::fflush(stdout);
     }
 }

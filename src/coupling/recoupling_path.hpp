@@ -31,7 +31,7 @@ struct recoupling_cost {
 struct recoupling_path {
     std::vector<recoupling_step> steps;
     recoupling_cost cost;
-    bool cheapest = true;  // false: the search gave up and the path was built couplings first
+    bool cheapest = true;  // false: the exact search gave up (cheapest_recoupling)
 };
 
 struct search_options {
@@ -41,10 +41,14 @@ struct search_options {
     // always_cheapest_up_to leaves; up to that many the search always runs to the end.
     std::size_t max_expanded = 20000;
     std::size_t always_cheapest_up_to = 8;
+    // Where it gives up, a second search that heads for T2 within the fewest sums takes at
+    // most this many states.
+    std::size_t fallback_max_expanded = 20000;
 };
 
-// The cheapest path; where the search gives up, a path that builds T2's couplings from the
-// leaves up, each by moving its two parts next to each other with 6j steps (cheapest false).
+// The cheapest path; where the search gives up, the cheaper of a quicker search's path (the
+// fewest sums first, then progress towards T2) and one that builds T2's couplings from the leaves up, each by moving
+// its two parts next to each other with 6j steps (cheapest false).
 recoupling_path cheapest_recoupling(const tree_shape& from, const tree_shape& to, const search_options& options = {});
 
 // The path that builds T2's couplings from the leaves up, on its own.

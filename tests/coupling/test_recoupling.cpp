@@ -8,6 +8,7 @@
 #include "coupling/random_trees.hpp"
 #include "coupling/recoupling_form.hpp"
 #include "model/coupling_tree.hpp"
+#include "print/print.hpp"
 #include "rules/cli_simplify.hpp"
 #include "support.hpp"
 
@@ -152,6 +153,41 @@ TEST_CASE("random pairs of coupling trees equal their definition, by the cheapes
         }
     CHECK(pairs == 300);
     CHECK(mismatches == 0);
+}
+
+TEST_CASE("where the search gives up, the path taken is still right and no dearer than the built one",
+          "[coupling][slow]") {
+    // Forced to give up after a few states: the quick search's path, or the one built from
+    // T2's couplings up, whichever is cheaper; its closed form still equals the definition.
+    std::mt19937 rng(23);
+    coupling::search_options hurried;
+    hurried.always_cheapest_up_to = 0;
+    hurried.max_expanded = 3;
+    int mismatches = 0, quick_cheaper = 0;
+    for (int n = 5; n <= 6; ++n)
+        for (int k = 0; k < 10; ++k) {
+            const std::string text = testing::random_recoupling_text(n, rng);
+            INFO(text);
+            auto p = testing::lower_text(text);
+            const GiNaC::ex held = p.statements[0].written;
+            const coupling_tree bra = tree_from_held(held.op(0)), ket = tree_from_held(held.op(1));
+            std::vector<GiNaC::ex> leaves;
+            for (const coupling_tree* l : leaves_of(bra)) leaves.push_back(l->label);
+            const auto from = coupling::shape_of(bra, leaves), to = coupling::shape_of(ket, leaves);
+            const auto form = coupling::closed_recoupling(bra, ket, p.numbers, held, hurried);
+            const auto exact = coupling::cheapest_recoupling(from, to);
+            const auto built = coupling::constructed_recoupling(from, to);
+            CHECK(!(form.cost < exact.cost));
+            CHECK(!(built.cost < form.cost));
+            quick_cheaper += built.cost.sums > form.cost.sums ? 1 : 0;
+            auto both = testing::lower_text(text + "\n" + to_text(form.value));
+            auto report =
+                testing::compare_at_points(both.statements[0].value, both.statements[1].value, both.numbers, 29, 3, 2);
+            mismatches += report.mismatches;
+            if (report.mismatches) FAIL_CHECK(text << " -> " << form.value);
+        }
+    CHECK(mismatches == 0);
+    CHECK(quick_cheaper > 0);  // the quick search's path was taken, with fewer sums
 }
 
 TEST_CASE("a recoupling coefficient that cannot be read says where", "[coupling][cli]") {
