@@ -37,7 +37,8 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
                                states (left part first), divided by 2J+1.  At most 12 leaves: the
                                definition, which check and eval use, sums over 2n-1 projections.
                                simplify reduces it by the fewest sums, then 6j/9j (exact search up
-                               to 8 leaves, a constructed path beyond when the search runs long).
+                               to 8 leaves; beyond, where it runs long, a quicker search that
+                               keeps the fewest sums it can, not always the fewest possible).
 
 Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
 collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product
