@@ -9,6 +9,7 @@
 #include "model/rewrite.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
+#include "model/tensor_operator.hpp"
 #include "parse/lower.hpp"
 #include "print/print.hpp"
 
@@ -164,6 +165,12 @@ private:
     }
 
     void build_symbol(node& n, const ex& e) {
+        if (is_reduced_element(e)) {
+            n.kind = node_kind::reduced_element;
+            n.text = operator_of(e);  // the value's seed
+            for (std::size_t k = 1; k < 4; ++k) n.forms.push_back(form(e.op(k)));
+            return;
+        }
         switch (kind_of(e)) {
             case symbol_kind::threej:
                 n.kind = node_kind::threej;

@@ -61,6 +61,7 @@ enum class node_kind {
     delta,
     triangle,
     projection,
+    reduced_element,  // <a || T^(k) || b>: a fixed pseudo-random value (model/tensor_operator.hpp)
     sum
 };
 

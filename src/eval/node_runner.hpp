@@ -11,6 +11,7 @@
 #include "exact/admissibility.hpp"
 #include "exact/wigner.hpp"
 #include "limits/run_limits.hpp"
+#include "model/tensor_operator.hpp"
 
 namespace couplet::eval_detail {
 
@@ -69,6 +70,11 @@ public:
             case node_kind::projection: {
                 auto j = self().twice(n.forms[0]), m = self().twice(n.forms[1]);
                 return j && m && exact::projection_ok(*j, *m) ? exact::number(1L) : exact::number();
+            }
+            case node_kind::reduced_element: {
+                auto k = self().twice(n.forms[0]), a = self().twice(n.forms[1]), b = self().twice(n.forms[2]);
+                if (!k || !a || !b) return exact::number();  // not quantum numbers: no such element
+                return exact::number(cln::the<cln::cl_RA>(reduced_element_value(n.text, *k, *a, *b).to_cl_N()));
             }
             case node_kind::sum:
                 return self().sum(n);

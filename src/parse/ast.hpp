@@ -24,6 +24,8 @@ struct call;
 struct bracket_symbol;
 struct clebsch_gordan;
 struct recoupling;
+struct reduced_element;
+struct matrix_element;
 struct sum;
 struct negated;
 struct expression;
@@ -31,7 +33,8 @@ struct expression;
 struct operand
     : x3::variant<nil, x3::forward_ast<number>, x3::forward_ast<identifier>, x3::forward_ast<call>,
                   x3::forward_ast<bracket_symbol>, x3::forward_ast<clebsch_gordan>, x3::forward_ast<recoupling>,
-                  x3::forward_ast<sum>, x3::forward_ast<negated>, x3::forward_ast<expression>> {
+                  x3::forward_ast<reduced_element>, x3::forward_ast<matrix_element>, x3::forward_ast<sum>,
+                  x3::forward_ast<negated>, x3::forward_ast<expression>> {
     using base_type::base_type;
     using base_type::operator=;
 };
@@ -100,6 +103,27 @@ struct coupling_side : located {
 // <(j1, j2) j12, j3; J | j1, (j2, j3) j23; J>
 struct recoupling : located {
     coupling_side bra, ket;
+};
+
+// A tensor operator of rank k, `T^(k)`.
+struct tensor_operator : located {
+    identifier name;
+    expression rank;
+};
+
+// `<a || T^(k) || b>`.
+struct reduced_element : located {
+    operand bra;
+    tensor_operator op;
+    operand ket;
+};
+
+// `<j m | T^(k)_q | j' m'>`.
+struct matrix_element : located {
+    operand j, m;
+    tensor_operator op;
+    operand component;
+    operand j_ket, m_ket;
 };
 
 struct sum : located {

@@ -48,6 +48,9 @@ COUPLET_RULE(coupling_tree, ast::coupling_tree, "coupling tree")
 COUPLET_RULE(coupled_pair, ast::coupled_pair, "coupling tree")
 COUPLET_RULE(coupling_side, ast::coupling_side, "coupled state")
 COUPLET_RULE(recoupling, ast::recoupling, "recoupling coefficient")
+COUPLET_RULE(tensor_operator, ast::tensor_operator, "tensor operator like T^(k)")
+COUPLET_RULE(reduced_element, ast::reduced_element, "reduced matrix element")
+COUPLET_RULE(matrix_element, ast::matrix_element, "matrix element")
 COUPLET_RULE(index_list, std::vector<ast::identifier>, "summation index")
 COUPLET_RULE(sum, ast::sum, "sum")
 COUPLET_RULE(name_list, std::vector<ast::identifier>, "name")
@@ -86,8 +89,8 @@ auto const unary_def = negated | power;
 auto const negated_def = lit('-') > unary;
 // The exponent is a unary, so a^b^c groups as a^(b^c) and a^-b is accepted.
 auto const power_def = primary >> *(char_('^') > unary);
-auto const primary_def =
-    round_symbol | curly_symbol | recoupling | clebsch_gordan | sum | number | call | identifier | parenthesized;
+auto const primary_def = round_symbol | curly_symbol | recoupling | reduced_element | matrix_element | clebsch_gordan |
+                         sum | number | call | identifier | parenthesized;
 auto const parenthesized_def = lit('(') > expression > ')';
 
 auto const args_def = expression % ',';
@@ -113,6 +116,13 @@ auto const coupled_pair_def = lit('(') >> coupling_tree >> ',' >> coupling_tree 
 auto const coupling_side_def = coupling_tree >> ',' >> coupling_tree >> ';' > cg_atom;
 auto const recoupling_def = lit('<') >> coupling_side > '|' > coupling_side > '>';
 
+// <a || T^(k) || b> and <j m | T^(k)_q | j' m'>.  Up to the "||", or the '|' after two
+// entries, a step may fail without an error: a Clebsch-Gordan symbol has a ',' there.
+auto const tensor_operator_def = identifier > '^' > '(' > expression > ')';
+auto const reduced_element_def = lit('<') >> cg_atom >> "||" > tensor_operator > "||" > cg_atom > '>';
+auto const matrix_element_def =
+    lit('<') >> cg_atom >> cg_atom >> '|' > tensor_operator > '_' > cg_atom > '|' > cg_atom > cg_atom > '>';
+
 auto const index_list_def = identifier % ',';
 auto const sum_def = kw("sum") > '(' > index_list > ':' > expression > ')';
 
@@ -135,8 +145,9 @@ auto const statement_rule_def = (declaration | definition | check_request | eval
 BOOST_SPIRIT_DEFINE(identifier, name_text, number, expression, multiplicative, power, unary, negated, primary,
                     parenthesized, args, call, row, rows, round_symbol, curly_symbol, cg_atom, cg_negated, cg_number,
                     number_operand, cg_divisor, clebsch_gordan, coupling_tree, coupled_pair, coupling_side, recoupling,
-                    index_list, sum, name_list, declaration, definition, check_request, assignment, assignment_list,
-                    eval_request, simplify_request, bare_check, bare_eval, bare_expression, end_of_statement)
+                    tensor_operator, reduced_element, matrix_element, index_list, sum, name_list, declaration,
+                    definition, check_request, assignment, assignment_list, eval_request, simplify_request, bare_check,
+                    bare_eval, bare_expression, end_of_statement)
 BOOST_SPIRIT_DEFINE(statement_rule)
 
 }  // namespace couplet::parser

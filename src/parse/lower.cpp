@@ -15,6 +15,7 @@
 #include "model/rewrite.hpp"
 #include "model/structure.hpp"
 #include "model/symbols.hpp"
+#include "model/tensor_operator.hpp"
 #include "print/print.hpp"
 
 namespace couplet {
@@ -410,12 +411,30 @@ private:
         return recoupling(as_held_tree(bra), as_held_tree(ket));
     }
 
+    // ---- tensor operators -----------------------------------------------------------------
+
+    ex node(const ast::reduced_element& r) {
+        return make_reduced_element(r.op.name.name, slot(r.op.rank, qn_role::angular), slot(r.bra, qn_role::angular),
+                                    slot(r.ket, qn_role::angular));
+    }
+
+    // Held whole like a recoupling coefficient; every other use takes the Wigner-Eckart form.
+    ex node(const ast::matrix_element& e) {
+        const ex j = slot(e.j, qn_role::angular), k = slot(e.op.rank, qn_role::angular),
+                 j_ket = slot(e.j_ket, qn_role::angular);
+        const ex m = projection_slot(e.m, j), q = projection_slot(e.component, k),
+                 m_ket = projection_slot(e.m_ket, j_ket);
+        return make_matrix_element(e.op.name.name, k, q, j, m, j_ket, m_ket);
+    }
+
     // Each recoupling coefficient replaced by its definition (model/coupling_tree.hpp), over
     // projections named after what they project: m + the leaf's or label's name (mj1, mJ),
     // primed on the right side and until the name is new to the input and to the statement.
     ex with_definitions(const ex& e, std::size_t offset) {
-        return rewritten(e, [&](const ex& part) {
-            return is_recoupling(part) ? std::optional<ex>(definition_of(part, offset)) : std::nullopt;
+        return rewritten(e, [&](const ex& part) -> std::optional<ex> {
+            if (is_recoupling(part)) return definition_of(part, offset);
+            if (is_matrix_element(part)) return wigner_eckart_form(part);
+            return std::nullopt;
         });
     }
 

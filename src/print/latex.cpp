@@ -6,6 +6,7 @@
 
 #include "exact/number.hpp"
 #include "model/symbols.hpp"
+#include "model/tensor_operator.hpp"
 #include "print/latex_width.hpp"
 #include "print/print.hpp"
 #include "print/writer.hpp"
@@ -109,6 +110,17 @@ protected:
         auto entry = [&](size_t i) { return at_least(f.op(i), level::product); };
         return {"\\langle " + entry(0) + "\\, " + entry(1) + ", " + entry(2) + "\\, " + entry(3) + " \\mid " +
                     entry(4) + "\\, " + entry(5) + "\\rangle",
+                level::atom};
+    }
+
+    // The trade's notation: \langle a \| T^{(k)} \| b \rangle, \langle j\, m | T^{(k)}_{q} | j'\, m' \rangle.
+    printed tensor_element(const ex& e) override {
+        const std::string op = latex_identifier(operator_of(e)) + "^{(" + write(e.op(1)).text + ")}";
+        auto entry = [&](size_t i) { return at_least(e.op(i), level::product); };
+        if (is_reduced_element(e))
+            return {"\\langle " + entry(2) + " \\| " + op + " \\| " + entry(3) + " \\rangle", level::atom};
+        return {"\\langle " + entry(3) + "\\, " + entry(4) + " \\mid " + op + "_{" + write(e.op(2)).text + "} \\mid " +
+                    entry(5) + "\\, " + entry(6) + " \\rangle",
                 level::atom};
     }
 

@@ -3,6 +3,7 @@
 #include <sstream>
 
 #include "model/symbols.hpp"
+#include "model/tensor_operator.hpp"
 #include "print/print.hpp"
 #include "print/writer.hpp"
 
@@ -59,6 +60,16 @@ protected:
     }
 
     recoupling_layout recoupling_brackets() override { return {"<", " | ", ">", " "}; }
+
+    // As written: <a || T^(k) || b>, <j m | T^(k)_q | j' m'>.
+    printed tensor_element(const ex& e) override {
+        const std::string op = operator_of(e) + "^(" + write(e.op(1)).text + ")";
+        if (is_reduced_element(e))
+            return {"<" + cg_entry(e.op(2)) + " || " + op + " || " + cg_entry(e.op(3)) + ">", level::atom};
+        return {"<" + cg_entry(e.op(3)) + " " + cg_entry(e.op(4)) + " | " + op + "_" + cg_entry(e.op(2)) + " | " +
+                    cg_entry(e.op(5)) + " " + cg_entry(e.op(6)) + ">",
+                level::atom};
+    }
 
     printed sum_over(const ex& s) override {
         const auto& is = ex_to<index_sum>(s);

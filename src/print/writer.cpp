@@ -7,6 +7,7 @@
 #include "model/coupling_tree.hpp"
 #include "model/readable_order.hpp"
 #include "model/symbols.hpp"
+#include "model/tensor_operator.hpp"
 #include "print/print.hpp"
 
 namespace couplet::print_detail {
@@ -143,6 +144,7 @@ printed writer::write(const ex& e) {
     if (is_a<index_sum>(e)) return sum_over(e);
     if (kind_of(e) != symbol_kind::none) return function(e);
     if (is_recoupling(e)) return recoupling(e);
+    if (is_reduced_element(e) || is_matrix_element(e)) return tensor_element(e);
     std::ostringstream os;  // not produced by couplet's own lowering; shown as GiNaC has it
     os << e;
     return {os.str(), level::atom};

@@ -53,6 +53,8 @@ protected:
         std::string open, bar, close, label_gap;
     };
     virtual recoupling_layout recoupling_brackets() = 0;
+    // <a || T^(k) || b> and <j m | T^(k)_q | j' m'> (model/tensor_operator.hpp).
+    virtual printed tensor_element(const GiNaC::ex& e) = 0;
 
 private:
     printed recoupling(const GiNaC::ex& e);

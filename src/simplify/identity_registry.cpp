@@ -6,6 +6,7 @@
 #include "rules/rewrites.hpp"
 #include "rules/rule.hpp"
 #include "simplify/stage_identities.hpp"
+#include "tensor/wigner_eckart_stage.hpp"
 
 namespace couplet {
 
@@ -23,6 +24,8 @@ const std::vector<const identity*>& all_identities() {
                  &coupling::exchanged_parts_identity(),
                  &coupling::orthonormal_states_identity(),
                  &coupling::recoupling_by_trees_identity(),
+                 // tensor operators
+                 &tensor::wigner_eckart_identity(),
                  // m-sum stage
                  &network::completeness_identity(),
                  &network::projection_delta_identity(),

@@ -17,6 +17,7 @@
 #include "simplify/nest_sums.hpp"
 #include "simplify/projection_owners.hpp"
 #include "simplify/stage_identities.hpp"
+#include "tensor/wigner_eckart_stage.hpp"
 
 namespace couplet {
 
@@ -63,7 +64,8 @@ GiNaC::ex simplify_expression(const GiNaC::ex& e, const quantum_numbers& numbers
 // phases are reduced after the symmetries have produced theirs.
 simplification simplify_with_steps(const GiNaC::ex& e, const quantum_numbers& numbers) {
     std::vector<simplification_step> steps_taken;
-    GiNaC::ex x = normalize(coupling::reduce_recouplings(e, numbers, &steps_taken));
+    GiNaC::ex x =
+        normalize(coupling::reduce_recouplings(tensor::apply_wigner_eckart(e, &steps_taken), numbers, &steps_taken));
     const bool recoupled = !steps_taken.empty();
     const ex recoupling_formula = x;
     const bool has_clebsch =
