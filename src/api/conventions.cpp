@@ -44,6 +44,13 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
                                exact value made from its name and arguments)
   <j m | T^(k)_q | j' m'>      matrix element of the component q: by the Wigner-Eckart theorem
                                (-1)^(j-m) 3j(j, k, j'; -m, q, m') <j || T^(k) || j'>
+  <(j1, j2) J M | T^(k)_q(1) | (j1', j2') J' M'>
+                               between coupled states (trees as above, alike on both sides), T
+                               acting on leaf 1 counted from the left, the identity on the others:
+                               the sum over the projections of the CG coefficients of both states
+  <(j1, j2) J || T^(k)(1) || (j1', j2') J'>
+                               its reduced element: sum over M, q, M' of
+                               (-1)^(J-M) 3j(J, k, J'; -M, q, M') <J M | T^(k)_q(1) | J' M'>
 
 Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
 collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product

@@ -64,12 +64,13 @@ ex recoupling_definition(coupling_tree bra, coupling_tree ket,
 
 namespace {
 
-void collect_leaves(const coupling_tree& tree, std::vector<const coupling_tree*>& out) {
+template <typename Tree>
+void collect_leaves(Tree& tree, std::vector<Tree*>& out) {
     if (tree.is_leaf()) {
         out.push_back(&tree);
         return;
     }
-    for (const coupling_tree& part : tree.parts) collect_leaves(part, out);
+    for (Tree& part : tree.parts) collect_leaves(part, out);
 }
 
 }  // namespace
@@ -98,6 +99,12 @@ coupling_tree tree_from_held(const ex& held) {
 
 std::vector<const coupling_tree*> leaves_of(const coupling_tree& tree) {
     std::vector<const coupling_tree*> out;
+    collect_leaves(tree, out);
+    return out;
+}
+
+std::vector<coupling_tree*> leaves_of(coupling_tree& tree) {
+    std::vector<coupling_tree*> out;
     collect_leaves(tree, out);
     return out;
 }

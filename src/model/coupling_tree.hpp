@@ -42,6 +42,7 @@ GiNaC::ex recoupling_definition(coupling_tree bra, coupling_tree ket,
 
 // The leaves of a tree, left to right.
 std::vector<const coupling_tree*> leaves_of(const coupling_tree& tree);
+std::vector<coupling_tree*> leaves_of(coupling_tree& tree);
 
 // A recoupling coefficient kept whole, recoupling(bra, ket): each side is the tree that
 // couples its two trees to J, held as a GiNaC list {left, right, label} per coupling and the

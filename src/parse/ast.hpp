@@ -26,6 +26,8 @@ struct clebsch_gordan;
 struct recoupling;
 struct reduced_element;
 struct matrix_element;
+struct coupled_matrix_element;
+struct coupled_reduced_element;
 struct sum;
 struct negated;
 struct expression;
@@ -33,8 +35,9 @@ struct expression;
 struct operand
     : x3::variant<nil, x3::forward_ast<number>, x3::forward_ast<identifier>, x3::forward_ast<call>,
                   x3::forward_ast<bracket_symbol>, x3::forward_ast<clebsch_gordan>, x3::forward_ast<recoupling>,
-                  x3::forward_ast<reduced_element>, x3::forward_ast<matrix_element>, x3::forward_ast<sum>,
-                  x3::forward_ast<negated>, x3::forward_ast<expression>> {
+                  x3::forward_ast<reduced_element>, x3::forward_ast<matrix_element>,
+                  x3::forward_ast<coupled_matrix_element>, x3::forward_ast<coupled_reduced_element>,
+                  x3::forward_ast<sum>, x3::forward_ast<negated>, x3::forward_ast<expression>> {
     using base_type::base_type;
     using base_type::operator=;
 };
@@ -124,6 +127,26 @@ struct matrix_element : located {
     tensor_operator op;
     operand component;
     operand j_ket, m_ket;
+};
+
+// `<(j1, j2) J M | T^(k)_q(1) | (j1', j2') J' M'>`: the operator acts on the part-th leaf,
+// counted from the left, of two states coupled alike.
+struct coupled_matrix_element : located {
+    coupled_pair bra;
+    operand m;
+    tensor_operator op;
+    operand component;
+    number part;
+    coupled_pair ket;
+    operand m_ket;
+};
+
+// `<(j1, j2) J || T^(k)(1) || (j1', j2') J'>`.
+struct coupled_reduced_element : located {
+    coupled_pair bra;
+    tensor_operator op;
+    number part;
+    coupled_pair ket;
 };
 
 struct sum : located {

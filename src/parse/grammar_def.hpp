@@ -51,6 +51,9 @@ COUPLET_RULE(recoupling, ast::recoupling, "recoupling coefficient")
 COUPLET_RULE(tensor_operator, ast::tensor_operator, "tensor operator like T^(k)")
 COUPLET_RULE(reduced_element, ast::reduced_element, "reduced matrix element")
 COUPLET_RULE(matrix_element, ast::matrix_element, "matrix element")
+COUPLET_RULE(acted_part, ast::number, "part the operator acts on, like (1)")
+COUPLET_RULE(coupled_matrix_element, ast::coupled_matrix_element, "matrix element between coupled states")
+COUPLET_RULE(coupled_reduced_element, ast::coupled_reduced_element, "reduced matrix element between coupled states")
 COUPLET_RULE(index_list, std::vector<ast::identifier>, "summation index")
 COUPLET_RULE(sum, ast::sum, "sum")
 COUPLET_RULE(name_list, std::vector<ast::identifier>, "name")
@@ -89,8 +92,9 @@ auto const unary_def = negated | power;
 auto const negated_def = lit('-') > unary;
 // The exponent is a unary, so a^b^c groups as a^(b^c) and a^-b is accepted.
 auto const power_def = primary >> *(char_('^') > unary);
-auto const primary_def = round_symbol | curly_symbol | recoupling | reduced_element | matrix_element | clebsch_gordan |
-                         sum | number | call | identifier | parenthesized;
+auto const primary_def = round_symbol | curly_symbol | recoupling | coupled_matrix_element | coupled_reduced_element |
+                         reduced_element | matrix_element | clebsch_gordan | sum | number | call | identifier |
+                         parenthesized;
 auto const parenthesized_def = lit('(') > expression > ')';
 
 auto const args_def = expression % ',';
@@ -123,6 +127,15 @@ auto const reduced_element_def = lit('<') >> cg_atom >> "||" > tensor_operator >
 auto const matrix_element_def =
     lit('<') >> cg_atom >> cg_atom >> '|' > tensor_operator > '_' > cg_atom > '|' > cg_atom > cg_atom > '>';
 
+// Between coupled states: <(j1, j2) J M | T^(k)_q(1) | (j1', j2') J' M'> and
+// <(j1, j2) J || T^(k)(1) || (j1', j2') J'>.  Tried before the elements above, whose first entry
+// cannot open a coupling; up to the bar every step may fail without an error.
+auto const acted_part_def = lit('(') > number > ')';
+auto const coupled_matrix_element_def = lit('<') >> coupled_pair >> cg_atom >> '|' > tensor_operator > '_' > cg_atom >
+                                        acted_part > '|' > coupled_pair > cg_atom > '>';
+auto const coupled_reduced_element_def =
+    lit('<') >> coupled_pair >> "||" > tensor_operator > acted_part > "||" > coupled_pair > '>';
+
 auto const index_list_def = identifier % ',';
 auto const sum_def = kw("sum") > '(' > index_list > ':' > expression > ')';
 
@@ -145,9 +158,10 @@ auto const statement_rule_def = (declaration | definition | check_request | eval
 BOOST_SPIRIT_DEFINE(identifier, name_text, number, expression, multiplicative, power, unary, negated, primary,
                     parenthesized, args, call, row, rows, round_symbol, curly_symbol, cg_atom, cg_negated, cg_number,
                     number_operand, cg_divisor, clebsch_gordan, coupling_tree, coupled_pair, coupling_side, recoupling,
-                    tensor_operator, reduced_element, matrix_element, index_list, sum, name_list, declaration,
-                    definition, check_request, assignment, assignment_list, eval_request, simplify_request, bare_check,
-                    bare_eval, bare_expression, end_of_statement)
+                    tensor_operator, reduced_element, matrix_element, acted_part, coupled_matrix_element,
+                    coupled_reduced_element, index_list, sum, name_list, declaration, definition, check_request,
+                    assignment, assignment_list, eval_request, simplify_request, bare_check, bare_eval, bare_expression,
+                    end_of_statement)
 BOOST_SPIRIT_DEFINE(statement_rule)
 
 }  // namespace couplet::parser

@@ -10,7 +10,9 @@
 #include <regex>
 #include <set>
 #include <sstream>
+#include <utility>
 
+#include "model/coupled_element.hpp"
 #include "model/coupling_tree.hpp"
 #include "model/rewrite.hpp"
 #include "model/structure.hpp"
@@ -65,11 +67,11 @@ public:
         s.span = p.span;
         s.text = src_.text().substr(p.span.begin, p.span.end - p.span.begin);
         while (!s.text.empty() && std::isspace(static_cast<unsigned char>(s.text.back()))) s.text.pop_back();
+        projections_of_statement_.clear();
         boost::apply_visitor([&](const auto& node) { this->fill(s, node); }, p.tree);
         s.written = s.value;
         s.written_rhs = s.rhs;
         if (s.kind != request_kind::declaration) {
-            projections_of_statement_.clear();
             s.value = with_definitions(s.value, p.span.begin);
             s.rhs = with_definitions(s.rhs, p.span.begin);
         }
@@ -399,7 +401,7 @@ private:
                              "both sides of a recoupling coefficient couple to the same total; found " +
                                  couplet::to_text(bra.label) + " on the left and " + couplet::to_text(ket.label) +
                                  " on the right");
-        const auto bra_leaves = leaves_of(bra), ket_leaves = leaves_of(ket);
+        const auto bra_leaves = leaves_of(std::as_const(bra)), ket_leaves = leaves_of(std::as_const(ket));
         if (bra_leaves.size() > max_coupled_leaves)
             throw user_error(r.offset, "a recoupling coefficient couples at most " +
                                            std::to_string(max_coupled_leaves) + " angular momenta; this one couples " +
@@ -427,6 +429,51 @@ private:
         return make_matrix_element(e.op.name.name, k, q, j, m, j_ket, m_ket);
     }
 
+    // Held with their expansions (model/coupled_element.hpp), whose new projections are
+    // named like a recoupling coefficient's.
+    ex node(const ast::coupled_matrix_element& e) {
+        const auto [bra, ket] = coupled_states(e.bra, e.ket);
+        const acted_on t = operator_on(e.op, e.part, bra);
+        const ex m_bra = projection_slot(e.m, bra.label), m_ket = projection_slot(e.m_ket, ket.label),
+                 q = projection_slot(e.component, t.rank);
+        return make_coupled_element(t, q, bra, m_bra, ket, m_ket, projections_for(e.offset));
+    }
+
+    ex node(const ast::coupled_reduced_element& e) {
+        const auto [bra, ket] = coupled_states(e.bra, e.ket);
+        return make_coupled_reduced_element(operator_on(e.op, e.part, bra), bra, ket, projections_for(e.offset));
+    }
+
+    std::pair<coupling_tree, coupling_tree> coupled_states(const ast::coupled_pair& b, const ast::coupled_pair& k) {
+        coupling_tree bra = tree(b), ket = tree(k);
+        if (!same_shape(bra, ket))
+            throw user_error(k.offset,
+                             "the two states of a matrix element are coupled in the same order, leaf for "
+                             "leaf, so that an operator on one part is the identity on the others");
+        const auto bra_leaves = leaves_of(std::as_const(bra)), ket_leaves = leaves_of(std::as_const(ket));
+        if (bra_leaves.size() > max_coupled_leaves)
+            throw user_error(b.offset, "a coupled state couples at most " + std::to_string(max_coupled_leaves) +
+                                           " angular momenta; this one couples " + std::to_string(bra_leaves.size()));
+        refuse_repeated_leaves(bra_leaves, "coupled state");
+        refuse_repeated_leaves(ket_leaves, "coupled state");
+        return {bra, ket};
+    }
+
+    acted_on operator_on(const ast::tensor_operator& op, const ast::number& part, const coupling_tree& bra) {
+        const std::size_t n = leaves_of(bra).size();
+        const bool in_range = part.digits.size() <= 2 && std::stoul(part.digits) >= 1 && std::stoul(part.digits) <= n;
+        if (!in_range)
+            throw user_error(part.offset, "the operator acts on one part of the state: a number from 1 to " +
+                                              std::to_string(n) + ", its leaves counted from the left");
+        return {op.name.name, slot(op.rank, qn_role::angular), std::stoul(part.digits)};
+    }
+
+    projection_source projections_for(std::size_t offset) {
+        return [this, offset](const ex& label, bool ket_side) {
+            return new_projection(label, ket_side ? "'" : "", offset);
+        };
+    }
+
     // Each recoupling coefficient replaced by its definition (model/coupling_tree.hpp), over
     // projections named after what they project: m + the leaf's or label's name (mj1, mJ),
     // primed on the right side and until the name is new to the input and to the statement.
@@ -434,14 +481,14 @@ private:
         return rewritten(e, [&](const ex& part) -> std::optional<ex> {
             if (is_recoupling(part)) return definition_of(part, offset);
             if (is_matrix_element(part)) return wigner_eckart_form(part);
+            if (is_coupled_element(part) || is_coupled_reduced_element(part))
+                return with_definitions(expansion_of(part), offset);
             return std::nullopt;
         });
     }
 
     ex definition_of(const ex& held, std::size_t offset) {
-        return recoupling_definition(
-            tree_from_held(held.op(0)), tree_from_held(held.op(1)),
-            [&](const ex& label, bool ket_side) { return new_projection(label, ket_side ? "'" : "", offset); });
+        return recoupling_definition(tree_from_held(held.op(0)), tree_from_held(held.op(1)), projections_for(offset));
     }
 
     coupling_tree side(const ast::coupling_side& s) {
@@ -459,19 +506,24 @@ private:
             out.label = slot(ast::operand(*leaf), qn_role::angular);
             return out;
         }
-        const ast::coupled_pair& pair = boost::get<ast::x3::forward_ast<ast::coupled_pair>>(t.get()).get();
+        return tree(boost::get<ast::x3::forward_ast<ast::coupled_pair>>(t.get()).get());
+    }
+
+    coupling_tree tree(const ast::coupled_pair& pair) {
+        coupling_tree out;
         out.offset = pair.offset;
         out.parts = {tree(pair.left), tree(pair.right)};
         out.label = slot(pair.label, qn_role::angular);
         return out;
     }
 
-    static void refuse_repeated_leaves(const std::vector<const coupling_tree*>& leaves) {
+    static void refuse_repeated_leaves(const std::vector<const coupling_tree*>& leaves,
+                                       const char* where = "side of the recoupling coefficient") {
         std::set<std::string> seen;
         for (const coupling_tree* leaf : leaves)
             if (!seen.insert(couplet::to_text(leaf->label)).second)
-                throw user_error(leaf->offset, "'" + couplet::to_text(leaf->label) +
-                                                   "' is coupled twice on this side of the recoupling coefficient");
+                throw user_error(leaf->offset,
+                                 "'" + couplet::to_text(leaf->label) + "' is coupled twice in this " + where);
     }
 
     static void refuse_unmatched_leaves(const std::vector<const coupling_tree*>& these,

@@ -5,6 +5,7 @@
 #include <sstream>
 
 #include "exact/number.hpp"
+#include "model/coupled_element.hpp"
 #include "model/symbols.hpp"
 #include "model/tensor_operator.hpp"
 #include "print/latex_width.hpp"
@@ -117,6 +118,15 @@ protected:
     printed tensor_element(const ex& e) override {
         const std::string op = latex_identifier(operator_of(e)) + "^{(" + write(e.op(1)).text + ")}";
         auto entry = [&](size_t i) { return at_least(e.op(i), level::product); };
+        auto state = [&](size_t tree) { return coupled(e.op(tree), recoupling_brackets()); };
+        if (is_coupled_reduced_element(e))
+            return {
+                "\\langle " + state(3) + " \\| " + op + "(" + write(e.op(2)).text + ") \\| " + state(4) + " \\rangle",
+                level::atom};
+        if (is_coupled_element(e))
+            return {"\\langle " + state(4) + "\\, " + entry(5) + " \\mid " + op + "_{" + write(e.op(2)).text + "}(" +
+                        write(e.op(3)).text + ") \\mid " + state(6) + "\\, " + entry(7) + " \\rangle",
+                    level::atom};
         if (is_reduced_element(e))
             return {"\\langle " + entry(2) + " \\| " + op + " \\| " + entry(3) + " \\rangle", level::atom};
         return {"\\langle " + entry(3) + "\\, " + entry(4) + " \\mid " + op + "_{" + write(e.op(2)).text + "} \\mid " +

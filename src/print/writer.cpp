@@ -4,6 +4,7 @@
 #include <sstream>
 #include <tuple>
 
+#include "model/coupled_element.hpp"
 #include "model/coupling_tree.hpp"
 #include "model/readable_order.hpp"
 #include "model/symbols.hpp"
@@ -144,7 +145,8 @@ printed writer::write(const ex& e) {
     if (is_a<index_sum>(e)) return sum_over(e);
     if (kind_of(e) != symbol_kind::none) return function(e);
     if (is_recoupling(e)) return recoupling(e);
-    if (is_reduced_element(e) || is_matrix_element(e)) return tensor_element(e);
+    if (is_reduced_element(e) || is_matrix_element(e) || is_coupled_element(e) || is_coupled_reduced_element(e))
+        return tensor_element(e);
     std::ostringstream os;  // not produced by couplet's own lowering; shown as GiNaC has it
     os << e;
     return {os.str(), level::atom};

@@ -53,12 +53,14 @@ protected:
         std::string open, bar, close, label_gap;
     };
     virtual recoupling_layout recoupling_brackets() = 0;
-    // <a || T^(k) || b> and <j m | T^(k)_q | j' m'> (model/tensor_operator.hpp).
+    // <a || T^(k) || b> and <j m | T^(k)_q | j' m'> (model/tensor_operator.hpp), and both
+    // between coupled states (model/coupled_element.hpp).
     virtual printed tensor_element(const GiNaC::ex& e) = 0;
+    // A held coupling tree, in the layout of a recoupling coefficient.
+    std::string coupled(const GiNaC::ex& held, const recoupling_layout& layout);
 
 private:
     printed recoupling(const GiNaC::ex& e);
-    std::string coupled(const GiNaC::ex& held, const recoupling_layout& layout);
     printed sum(const GiNaC::ex& e);
     printed product(const GiNaC::ex& e);
     std::string join_factors(const std::vector<GiNaC::ex>& factors, const GiNaC::numeric& coefficient);

@@ -1,5 +1,6 @@
 #include "tensor/wigner_eckart_stage.hpp"
 
+#include "model/coupled_element.hpp"
 #include "model/rewrite.hpp"
 #include "model/symbols.hpp"
 #include "model/tensor_operator.hpp"
@@ -19,7 +20,20 @@ const identity& wigner_eckart_identity() {
     return id;
 }
 
-ex apply_wigner_eckart(const ex& e, std::vector<derivation_step>* steps) {
+// The definition, not a rule: recorded as a step so that a derivation starts where a textbook's does.
+ex expand_coupled_states(const ex& e, std::vector<derivation_step>* steps) {
+    return rewritten(e, [&](const ex& part) -> std::optional<ex> {
+        if (!is_coupled_element(part) && !is_coupled_reduced_element(part)) return std::nullopt;
+        const ex after = expansion_of(part);
+        if (steps)
+            steps->push_back({"coupled states by their Clebsch-Gordan coefficients",
+                              "definition, Condon-Shortley, left part first", part, after});
+        return after;
+    });
+}
+
+ex apply_wigner_eckart(const ex& input, std::vector<derivation_step>* steps) {
+    const ex e = expand_coupled_states(input, steps);
     return rewritten(e, [&](const ex& part) -> std::optional<ex> {
         if (!is_matrix_element(part)) return std::nullopt;
         const ex after = wigner_eckart_form(part);

@@ -17,6 +17,8 @@ namespace couplet::tensor {
 // normalization of the convention.
 const identity& wigner_eckart_identity();
 
+// Coupled-state elements (model/coupled_element.hpp) first take their expansions, whose
+// elementary matrix elements then take the Wigner-Eckart form like any other.
 GiNaC::ex apply_wigner_eckart(const GiNaC::ex& e, std::vector<derivation_step>* steps = nullptr);
 
 }  // namespace couplet::tensor
