@@ -34,15 +34,6 @@ void relabel(coupling_tree& t, const exmap& to_bra) {
     for (coupling_tree& part : t.parts) relabel(part, to_bra);
 }
 
-void name_inner_projections(coupling_tree& t, bool ket_side, const projection_source& projection_for, lst& summed) {
-    for (coupling_tree& part : t.parts) {
-        if (part.is_leaf()) continue;
-        part.projection = projection_for(part.label, ket_side);
-        summed.append(part.projection);
-        name_inner_projections(part, ket_side, projection_for, summed);
-    }
-}
-
 struct expanded {
     ex body;
     lst summed;
@@ -55,7 +46,7 @@ struct expanded {
 expanded expand(const acted_on& t, const ex& component, coupling_tree bra, const ex& m_bra, coupling_tree ket,
                 const ex& m_ket, const projection_source& projection_for) {
     expanded out;
-    const std::vector<coupling_tree*> bra_leaves = leaves_of(bra), ket_leaves = leaves_of(ket);
+    const std::vector<coupling_tree*> bra_leaves = leaves_to_fill(bra), ket_leaves = leaves_to_fill(ket);
     exmap to_bra;
     ex deltas = 1;
     for (std::size_t i = 0; i < bra_leaves.size(); ++i) {

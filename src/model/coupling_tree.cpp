@@ -27,22 +27,17 @@ ex coupling_coefficients(const coupling_tree& tree) {
            coupling_coefficients(a) * coupling_coefficients(b);
 }
 
-namespace {
+namespace {}  // namespace
 
-void name_projections(coupling_tree& t, const std::map<std::string, ex>& leaf_projection, bool ket_side,
-                      const std::function<ex(const ex&, bool)>& projection_for, lst& summed) {
+void name_inner_projections(coupling_tree& t, bool ket_side,
+                            const std::function<ex(const ex& label, bool ket_side)>& projection_for, lst& summed) {
     for (coupling_tree& part : t.parts) {
-        if (part.is_leaf()) {
-            part.projection = leaf_projection.at(leaf_key(part.label));
-            continue;
-        }
+        if (part.is_leaf()) continue;
         part.projection = projection_for(part.label, ket_side);
         summed.append(part.projection);
-        name_projections(part, leaf_projection, ket_side, projection_for, summed);
+        name_inner_projections(part, ket_side, projection_for, summed);
     }
 }
-
-}  // namespace
 
 ex recoupling_definition(coupling_tree bra, coupling_tree ket,
                          const std::function<ex(const ex& label, bool ket_side)>& projection_for) {
@@ -53,8 +48,10 @@ ex recoupling_definition(coupling_tree bra, coupling_tree ket,
         leaf_projection[leaf_key(leaf->label)] = m;
         summed.append(m);
     }
-    name_projections(bra, leaf_projection, false, projection_for, summed);
-    name_projections(ket, leaf_projection, true, projection_for, summed);
+    for (coupling_tree* side : {&bra, &ket})
+        for (coupling_tree* leaf : leaves_to_fill(*side)) leaf->projection = leaf_projection.at(leaf_key(leaf->label));
+    name_inner_projections(bra, false, projection_for, summed);
+    name_inner_projections(ket, true, projection_for, summed);
     const ex total = projection_for(bra.label, false);
     bra.projection = ket.projection = total;
     summed.append(total);
@@ -103,7 +100,7 @@ std::vector<const coupling_tree*> leaves_of(const coupling_tree& tree) {
     return out;
 }
 
-std::vector<coupling_tree*> leaves_of(coupling_tree& tree) {
+std::vector<coupling_tree*> leaves_to_fill(coupling_tree& tree) {
     std::vector<coupling_tree*> out;
     collect_leaves(tree, out);
     return out;

@@ -40,9 +40,16 @@ GiNaC::ex coupling_coefficients(const coupling_tree& tree);
 GiNaC::ex recoupling_definition(coupling_tree bra, coupling_tree ket,
                                 const std::function<GiNaC::ex(const GiNaC::ex& label, bool ket_side)>& projection_for);
 
+// Each coupling below the top of t gets a new projection from projection_for, appended to
+// summed in preorder; the leaves and the top are left to the caller.
+void name_inner_projections(coupling_tree& t, bool ket_side,
+                            const std::function<GiNaC::ex(const GiNaC::ex& label, bool ket_side)>& projection_for,
+                            GiNaC::lst& summed);
+
 // The leaves of a tree, left to right.
 std::vector<const coupling_tree*> leaves_of(const coupling_tree& tree);
-std::vector<coupling_tree*> leaves_of(coupling_tree& tree);
+// The same, writable, for a caller that sets their projections.
+std::vector<coupling_tree*> leaves_to_fill(coupling_tree& tree);
 
 // A recoupling coefficient kept whole, recoupling(bra, ket): each side is the tree that
 // couples its two trees to J, held as a GiNaC list {left, right, label} per coupling and the

@@ -10,7 +10,6 @@
 #include <regex>
 #include <set>
 #include <sstream>
-#include <utility>
 
 #include "model/coupled_element.hpp"
 #include "model/coupling_tree.hpp"
@@ -401,13 +400,8 @@ private:
                              "both sides of a recoupling coefficient couple to the same total; found " +
                                  couplet::to_text(bra.label) + " on the left and " + couplet::to_text(ket.label) +
                                  " on the right");
-        const auto bra_leaves = leaves_of(std::as_const(bra)), ket_leaves = leaves_of(std::as_const(ket));
-        if (bra_leaves.size() > max_coupled_leaves)
-            throw user_error(r.offset, "a recoupling coefficient couples at most " +
-                                           std::to_string(max_coupled_leaves) + " angular momenta; this one couples " +
-                                           std::to_string(bra_leaves.size()));
-        refuse_repeated_leaves(bra_leaves);
-        refuse_repeated_leaves(ket_leaves);
+        const auto [bra_leaves, ket_leaves] = checked_leaves(bra, ket, r.offset, "a recoupling coefficient",
+                                                             "on this side of the recoupling coefficient");
         refuse_unmatched_leaves(bra_leaves, ket_leaves, "left");
         refuse_unmatched_leaves(ket_leaves, bra_leaves, "right");
         return recoupling(as_held_tree(bra), as_held_tree(ket));
@@ -450,22 +444,18 @@ private:
             throw user_error(k.offset,
                              "the two states of a matrix element are coupled in the same order, leaf for "
                              "leaf, so that an operator on one part is the identity on the others");
-        const auto bra_leaves = leaves_of(std::as_const(bra)), ket_leaves = leaves_of(std::as_const(ket));
-        if (bra_leaves.size() > max_coupled_leaves)
-            throw user_error(b.offset, "a coupled state couples at most " + std::to_string(max_coupled_leaves) +
-                                           " angular momenta; this one couples " + std::to_string(bra_leaves.size()));
-        refuse_repeated_leaves(bra_leaves, "coupled state");
-        refuse_repeated_leaves(ket_leaves, "coupled state");
+        checked_leaves(bra, ket, b.offset, "a coupled state", "in this coupled state");
         return {bra, ket};
     }
 
     acted_on operator_on(const ast::tensor_operator& op, const ast::number& part, const coupling_tree& bra) {
         const std::size_t n = leaves_of(bra).size();
-        const bool in_range = part.digits.size() <= 2 && std::stoul(part.digits) >= 1 && std::stoul(part.digits) <= n;
-        if (!in_range)
+        // At most two digits: max_coupled_leaves bounds n, and stoul is not handed an overflow.
+        const std::size_t p = part.digits.size() <= 2 ? std::stoul(part.digits) : 0;
+        if (p < 1 || p > n)
             throw user_error(part.offset, "the operator acts on one part of the state: a number from 1 to " +
                                               std::to_string(n) + ", its leaves counted from the left");
-        return {op.name.name, slot(op.rank, qn_role::angular), std::stoul(part.digits)};
+        return {op.name.name, slot(op.rank, qn_role::angular), p};
     }
 
     projection_source projections_for(std::size_t offset) {
@@ -517,13 +507,26 @@ private:
         return out;
     }
 
-    static void refuse_repeated_leaves(const std::vector<const coupling_tree*>& leaves,
-                                       const char* where = "side of the recoupling coefficient") {
+    using leaf_list = std::vector<const coupling_tree*>;
+
+    // The leaves of both sides: at most max_coupled_leaves, none coupled twice on one side.
+    static std::pair<leaf_list, leaf_list> checked_leaves(const coupling_tree& bra, const coupling_tree& ket,
+                                                          std::size_t offset, const std::string& what,
+                                                          const std::string& where) {
+        std::pair<leaf_list, leaf_list> out{leaves_of(bra), leaves_of(ket)};
+        if (out.first.size() > max_coupled_leaves)
+            throw user_error(offset, what + " couples at most " + std::to_string(max_coupled_leaves) +
+                                         " angular momenta; this one couples " + std::to_string(out.first.size()));
+        refuse_repeated_leaves(out.first, where);
+        refuse_repeated_leaves(out.second, where);
+        return out;
+    }
+
+    static void refuse_repeated_leaves(const leaf_list& leaves, const std::string& where) {
         std::set<std::string> seen;
         for (const coupling_tree* leaf : leaves)
             if (!seen.insert(couplet::to_text(leaf->label)).second)
-                throw user_error(leaf->offset,
-                                 "'" + couplet::to_text(leaf->label) + "' is coupled twice in this " + where);
+                throw user_error(leaf->offset, "'" + couplet::to_text(leaf->label) + "' is coupled twice " + where);
     }
 
     static void refuse_unmatched_leaves(const std::vector<const coupling_tree*>& these,

@@ -5,9 +5,7 @@
 #include <sstream>
 
 #include "exact/number.hpp"
-#include "model/coupled_element.hpp"
 #include "model/symbols.hpp"
-#include "model/tensor_operator.hpp"
 #include "print/latex_width.hpp"
 #include "print/print.hpp"
 #include "print/writer.hpp"
@@ -114,25 +112,13 @@ protected:
                 level::atom};
     }
 
-    // The trade's notation: \langle a \| T^{(k)} \| b \rangle, \langle j\, m | T^{(k)}_{q} | j'\, m' \rangle.
-    printed tensor_element(const ex& e) override {
-        const std::string op = latex_identifier(operator_of(e)) + "^{(" + write(e.op(1)).text + ")}";
-        auto entry = [&](size_t i) { return at_least(e.op(i), level::product); };
-        auto state = [&](size_t tree) { return coupled(e.op(tree), recoupling_brackets()); };
-        if (is_coupled_reduced_element(e))
-            return {
-                "\\langle " + state(3) + " \\| " + op + "(" + write(e.op(2)).text + ") \\| " + state(4) + " \\rangle",
-                level::atom};
-        if (is_coupled_element(e))
-            return {"\\langle " + state(4) + "\\, " + entry(5) + " \\mid " + op + "_{" + write(e.op(2)).text + "}(" +
-                        write(e.op(3)).text + ") \\mid " + state(6) + "\\, " + entry(7) + " \\rangle",
-                    level::atom};
-        if (is_reduced_element(e))
-            return {"\\langle " + entry(2) + " \\| " + op + " \\| " + entry(3) + " \\rangle", level::atom};
-        return {"\\langle " + entry(3) + "\\, " + entry(4) + " \\mid " + op + "_{" + write(e.op(2)).text + "} \\mid " +
-                    entry(5) + "\\, " + entry(6) + " \\rangle",
-                level::atom};
+    // The trade's notation: \langle a \| T^{(k)} \| b \rangle, \langle j\, m \mid T^{(k)}_{q} \mid j'\, m' \rangle.
+    element_layout element_brackets() override { return {"\\langle ", " \\mid ", " \\| ", " \\rangle", "\\, "}; }
+    std::string operator_symbol(const std::string& name, const ex& rank, const ex* component) override {
+        return latex_identifier(name) + "^{(" + write(rank).text + ")}" +
+               (component ? "_{" + write(*component).text + "}" : "");
     }
+    std::string element_entry(const ex& e) override { return at_least(e, level::product); }
 
     // Edmonds' layout (ch. 6): the two coupled states in one angle bracket.
     recoupling_layout recoupling_brackets() override {

@@ -2,9 +2,7 @@
 #include <map>
 #include <sstream>
 
-#include "model/coupled_element.hpp"
 #include "model/symbols.hpp"
-#include "model/tensor_operator.hpp"
 #include "print/print.hpp"
 #include "print/writer.hpp"
 
@@ -63,24 +61,11 @@ protected:
     recoupling_layout recoupling_brackets() override { return {"<", " | ", ">", " "}; }
 
     // As written: <a || T^(k) || b>, <j m | T^(k)_q | j' m'>.
-    printed tensor_element(const ex& e) override {
-        const std::string op = operator_of(e) + "^(" + write(e.op(1)).text + ")";
-        auto state = [&](size_t tree, const std::string& tail) {
-            return coupled(e.op(tree), recoupling_brackets()) + tail;
-        };
-        if (is_coupled_reduced_element(e))
-            return {"<" + state(3, "") + " || " + op + "(" + write(e.op(2)).text + ") || " + state(4, "") + ">",
-                    level::atom};
-        if (is_coupled_element(e))
-            return {"<" + state(4, " " + cg_entry(e.op(5))) + " | " + op + "_" + cg_entry(e.op(2)) + "(" +
-                        write(e.op(3)).text + ") | " + state(6, " " + cg_entry(e.op(7))) + ">",
-                    level::atom};
-        if (is_reduced_element(e))
-            return {"<" + cg_entry(e.op(2)) + " || " + op + " || " + cg_entry(e.op(3)) + ">", level::atom};
-        return {"<" + cg_entry(e.op(3)) + " " + cg_entry(e.op(4)) + " | " + op + "_" + cg_entry(e.op(2)) + " | " +
-                    cg_entry(e.op(5)) + " " + cg_entry(e.op(6)) + ">",
-                level::atom};
+    element_layout element_brackets() override { return {"<", " | ", " || ", ">", " "}; }
+    std::string operator_symbol(const std::string& name, const ex& rank, const ex* component) override {
+        return name + "^(" + write(rank).text + ")" + (component ? "_" + cg_entry(*component) : "");
     }
+    std::string element_entry(const ex& e) override { return cg_entry(e); }
 
     printed sum_over(const ex& s) override {
         const auto& is = ex_to<index_sum>(s);

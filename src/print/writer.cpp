@@ -160,6 +160,27 @@ printed writer::recoupling(const ex& e) {
     return {layout.open + side(e.op(0)) + layout.bar + side(e.op(1)) + layout.close, level::atom};
 }
 
+printed writer::tensor_element(const ex& e) {
+    const element_layout l = element_brackets();
+    const std::string name = operator_of(e);
+    auto entry = [&](size_t i) { return element_entry(e.op(i)); };
+    auto state = [&](size_t tree) { return coupled(e.op(tree), recoupling_brackets()); };
+    auto part = [&](size_t i) { return "(" + write(e.op(i)).text + ")"; };
+    const ex component = e.op(2);
+    std::string text;
+    if (is_reduced_element(e))
+        text = entry(2) + l.double_bar + operator_symbol(name, e.op(1), nullptr) + l.double_bar + entry(3);
+    else if (is_matrix_element(e))
+        text = entry(3) + l.gap + entry(4) + l.bar + operator_symbol(name, e.op(1), &component) + l.bar + entry(5) +
+               l.gap + entry(6);
+    else if (is_coupled_reduced_element(e))
+        text = state(3) + l.double_bar + operator_symbol(name, e.op(1), nullptr) + part(2) + l.double_bar + state(4);
+    else
+        text = state(4) + l.gap + entry(5) + l.bar + operator_symbol(name, e.op(1), &component) + part(3) + l.bar +
+               state(6) + l.gap + entry(7);
+    return {l.open + text + l.close, level::atom};
+}
+
 std::string writer::coupled(const ex& held, const recoupling_layout& layout) {
     if (!is_a<lst>(held)) return write(held).text;
     return "(" + coupled(held.op(0), layout) + ", " + coupled(held.op(1), layout) + ")" + layout.label_gap +

@@ -54,13 +54,21 @@ protected:
     };
     virtual recoupling_layout recoupling_brackets() = 0;
     // <a || T^(k) || b> and <j m | T^(k)_q | j' m'> (model/tensor_operator.hpp), and both
-    // between coupled states (model/coupled_element.hpp).
-    virtual printed tensor_element(const GiNaC::ex& e) = 0;
-    // A held coupling tree, in the layout of a recoupling coefficient.
-    std::string coupled(const GiNaC::ex& held, const recoupling_layout& layout);
+    // between coupled states (model/coupled_element.hpp): the brackets, the bars, and what
+    // stands between a j and its m.
+    struct element_layout {
+        std::string open, bar, double_bar, close, gap;
+    };
+    virtual element_layout element_brackets() = 0;
+    // T^(k), with its component when there is one.
+    virtual std::string operator_symbol(const std::string& name, const GiNaC::ex& rank, const GiNaC::ex* component) = 0;
+    // A j or m inside an element.
+    virtual std::string element_entry(const GiNaC::ex& e) = 0;
 
 private:
     printed recoupling(const GiNaC::ex& e);
+    std::string coupled(const GiNaC::ex& held, const recoupling_layout& layout);
+    printed tensor_element(const GiNaC::ex& e);
     printed sum(const GiNaC::ex& e);
     printed product(const GiNaC::ex& e);
     std::string join_factors(const std::vector<GiNaC::ex>& factors, const GiNaC::numeric& coefficient);
