@@ -39,7 +39,7 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
                                simplify reduces it by the fewest sums, then 6j/9j (exact search up
                                to 8 leaves; beyond, where it runs long, a quicker search that
                                keeps the fewest sums it can, not always the fewest possible).
-  <j || T^(k) || j'>            reduced matrix element of the tensor operator T of rank k: a
+  <j || T^(k) || j'>           reduced matrix element of the tensor operator T of rank k: a
                                factor of its own (eval and check give it a fixed pseudo-random
                                exact value made from its name and arguments)
   <j m | T^(k)_q | j' m'>      matrix element of the component q: by the Wigner-Eckart theorem
