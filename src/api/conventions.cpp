@@ -51,6 +51,15 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
   <(j1, j2) J || T^(k)(1) || (j1', j2') J'>
                                its reduced element: sum over M, q, M' of
                                (-1)^(J-M) 3j(J, k, J'; -M, q, M') <J M | T^(k)_q(1) | J' M'>
+  [T^(k1)(1) x U^(k2)(2)]^(k)_q
+                               in place of T^(k)_q(1): the tensor product, components
+                               sum over q1, q2 of <k1 q1, k2 q2 | k q> T_q1 U_q2; two on one part
+                               go through the states between them, summed over j''
+  T^(k)(1) . U^(k)(2)          the scalar product sum over q of (-1)^q T_q U_-q (k an integer);
+                               no component
+  J^(1)                        the angular momentum of its part: J_0 = J_z, J_+-1 = -+J+-/sqrt(2)
+                               with the ladder coefficients, <j || J^(1) || j'> = delta(j, j')
+                               sqrt(j(j+1)(2j+1))
 
 Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
 collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product

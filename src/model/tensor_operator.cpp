@@ -23,7 +23,10 @@ void operator_name::do_print(const print_context& c, unsigned) const { c.s << na
 REGISTER_FUNCTION(reduced_element, dummy())
 REGISTER_FUNCTION(matrix_element, dummy())
 
+bool is_angular_momentum(const std::string& op) { return op == "J"; }
+
 ex make_reduced_element(const std::string& op, const ex& rank, const ex& bra, const ex& ket) {
+    if (is_angular_momentum(op)) return kdelta(bra, ket) * sqrt(bra * (bra + 1) * (2 * bra + 1));
     return reduced_element(operator_name(op), rank, bra, ket).hold();
 }
 

@@ -33,6 +33,13 @@ DECLARE_FUNCTION_4P(reduced_element)
 // matrix_element(T, k, q, j, m, j', m') = <j m | T^(k)_q | j' m'>.
 DECLARE_FUNCTION_7P(matrix_element)
 
+// The one operator couplet knows by its definition: J^(1), the angular momentum of the part it
+// acts on, whose spherical components J_{+1} = -J+/sqrt(2), J_0 = J_z, J_{-1} = J-/sqrt(2) act
+// by the Condon-Shortley ladder coefficients; its reduced element is
+//   <j || J^(1) || j'> = delta(j, j') sqrt(j (j+1) (2j+1))       (Edmonds 1957, eq. 5.4.3).
+bool is_angular_momentum(const std::string& op);
+
+// <a || T^(k) || b>, held; for J^(1) its value above.
 GiNaC::ex make_reduced_element(const std::string& op, const GiNaC::ex& rank, const GiNaC::ex& bra,
                                const GiNaC::ex& ket);
 GiNaC::ex make_matrix_element(const std::string& op, const GiNaC::ex& rank, const GiNaC::ex& component,

@@ -3,6 +3,7 @@
 // the byte offset of its first character in the source text.
 #pragma once
 
+#include <boost/optional.hpp>
 #include <boost/spirit/home/x3/support/ast/variant.hpp>
 #include <cstddef>
 #include <list>
@@ -129,14 +130,32 @@ struct matrix_element : located {
     operand j_ket, m_ket;
 };
 
-// `<(j1, j2) J M | T^(k)_q(1) | (j1', j2') J' M'>`: the operator acts on the part-th leaf,
-// counted from the left, of two states coupled alike.
+// The operator between coupled states: a named operator on one part, `T^(k)(1)` or, as a
+// whole operator with its component, `T^(k)_q(1)`; a tensor product `[A x B]^(k)`, with `_q`
+// as a whole operator; joined by '.', the scalar product of two.  Where a component may
+// stand is checked during lowering.
+struct acted_operator : located {
+    tensor_operator op;
+    boost::optional<operand> component;
+    number part;
+};
+struct operator_product;
+struct operator_factor : x3::variant<acted_operator, x3::forward_ast<operator_product>> {
+    using base_type::base_type;
+    using base_type::operator=;
+};
+struct operator_product : located {
+    operator_factor left, right;
+    expression rank;
+    boost::optional<operand> component;
+};
+
+// `<(j1, j2) J M | T^(k)_q(1) | (j1', j2') J' M'>`: the operator acts on leaves, counted from
+// the left, of two states coupled alike.
 struct coupled_matrix_element : located {
     coupled_pair bra;
     operand m;
-    tensor_operator op;
-    operand component;
-    number part;
+    std::vector<operator_factor> op;  // two for a scalar product
     coupled_pair ket;
     operand m_ket;
 };
@@ -144,8 +163,7 @@ struct coupled_matrix_element : located {
 // `<(j1, j2) J || T^(k)(1) || (j1', j2') J'>`.
 struct coupled_reduced_element : located {
     coupled_pair bra;
-    tensor_operator op;
-    number part;
+    std::vector<operator_factor> op;
     coupled_pair ket;
 };
 

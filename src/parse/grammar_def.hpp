@@ -52,6 +52,12 @@ COUPLET_RULE(tensor_operator, ast::tensor_operator, "tensor operator like T^(k)"
 COUPLET_RULE(reduced_element, ast::reduced_element, "reduced matrix element")
 COUPLET_RULE(matrix_element, ast::matrix_element, "matrix element")
 COUPLET_RULE(acted_part, ast::number, "part the operator acts on, like (1)")
+COUPLET_RULE(operator_component, ast::operand, "component")
+COUPLET_RULE(acted_operator, ast::acted_operator, "operator on a part, like T^(k)(1)")
+COUPLET_RULE(operator_product, ast::operator_product, "tensor product like [T^(k1)(1) x U^(k2)(2)]^(k)")
+COUPLET_RULE(times_sign, x3::unused_type, "'x' between the two operators of a tensor product")
+COUPLET_RULE(operator_factor, ast::operator_factor, "operator on a part, like T^(k)(1)")
+COUPLET_RULE(coupled_operator, std::vector<ast::operator_factor>, "operator on a part, like T^(k)(1)")
 COUPLET_RULE(coupled_matrix_element, ast::coupled_matrix_element, "matrix element between coupled states")
 COUPLET_RULE(coupled_reduced_element, ast::coupled_reduced_element, "reduced matrix element between coupled states")
 COUPLET_RULE(index_list, std::vector<ast::identifier>, "summation index")
@@ -128,13 +134,21 @@ auto const matrix_element_def =
     lit('<') >> cg_atom >> cg_atom >> '|' > tensor_operator > '_' > cg_atom > '|' > cg_atom > cg_atom > '>';
 
 // Between coupled states: <(j1, j2) J M | T^(k)_q(1) | (j1', j2') J' M'> and
-// <(j1, j2) J || T^(k)(1) || (j1', j2') J'>.  Tried before the elements above, whose first entry
-// cannot open a coupling; up to the bar every step may fail without an error.
+// <(j1, j2) J || T^(k)(1) || (j1', j2') J'>, with [A x B]^(k)_q or A . B for the operator.
+// Tried before the elements above, whose first entry cannot open a coupling; up to the bar
+// every step may fail without an error.
 auto const acted_part_def = lit('(') > number > ')';
-auto const coupled_matrix_element_def = lit('<') >> coupled_pair >> cg_atom >> '|' > tensor_operator > '_' > cg_atom >
-                                        acted_part > '|' > coupled_pair > cg_atom > '>';
+auto const operator_component_def = lit('_') > cg_atom;
+auto const acted_operator_def = tensor_operator >> -operator_component > acted_part;
+auto const times_sign_def = kw("x");
+auto const operator_product_def = lit('[') > operator_factor > times_sign > operator_factor > ']' > '^' > '(' > expression
+                                  > ')' > -operator_component;
+auto const operator_factor_def = operator_product | acted_operator;
+auto const coupled_operator_def = operator_factor % '.';
+auto const coupled_matrix_element_def =
+    lit('<') >> coupled_pair >> cg_atom >> '|' > coupled_operator > '|' > coupled_pair > cg_atom > '>';
 auto const coupled_reduced_element_def =
-    lit('<') >> coupled_pair >> "||" > tensor_operator > acted_part > "||" > coupled_pair > '>';
+    lit('<') >> coupled_pair >> "||" > coupled_operator > "||" > coupled_pair > '>';
 
 auto const index_list_def = identifier % ',';
 auto const sum_def = kw("sum") > '(' > index_list > ':' > expression > ')';
@@ -158,7 +172,8 @@ auto const statement_rule_def = (declaration | definition | check_request | eval
 BOOST_SPIRIT_DEFINE(identifier, name_text, number, expression, multiplicative, power, unary, negated, primary,
                     parenthesized, args, call, row, rows, round_symbol, curly_symbol, cg_atom, cg_negated, cg_number,
                     number_operand, cg_divisor, clebsch_gordan, coupling_tree, coupled_pair, coupling_side, recoupling,
-                    tensor_operator, reduced_element, matrix_element, acted_part, coupled_matrix_element,
+                    tensor_operator, reduced_element, matrix_element, acted_part, operator_component, acted_operator,
+                    operator_product, times_sign, operator_factor, coupled_operator, coupled_matrix_element,
                     coupled_reduced_element, index_list, sum, name_list, declaration, definition, check_request,
                     assignment, assignment_list, eval_request, simplify_request, bare_check, bare_eval, bare_expression,
                     end_of_statement)

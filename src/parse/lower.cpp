@@ -11,6 +11,7 @@
 #include <set>
 #include <sstream>
 
+#include "model/composite_operator.hpp"
 #include "model/coupled_element.hpp"
 #include "model/coupling_tree.hpp"
 #include "model/rewrite.hpp"
@@ -36,6 +37,18 @@ struct offset_visitor : boost::static_visitor<std::size_t> {
 };
 
 std::size_t offset_of(const ast::operand& o) { return boost::apply_visitor(offset_visitor{}, o); }
+
+// A factor of the operator between coupled states (ast::operator_factor): its component
+// and where it starts.
+const boost::optional<ast::operand>& component_of(const ast::operator_factor& f) {
+    if (const auto* a = boost::get<ast::acted_operator>(&f.get())) return a->component;
+    return boost::get<ast::x3::forward_ast<ast::operator_product>>(f.get()).get().component;
+}
+
+std::size_t offset_of(const ast::operator_factor& f) {
+    if (const auto* a = boost::get<ast::acted_operator>(&f.get())) return a->offset;
+    return boost::get<ast::x3::forward_ast<ast::operator_product>>(f.get()).get().offset;
+}
 
 std::set<symbol, ex_is_less> symbols_in(const ex& e) {
     std::set<symbol, ex_is_less> out;
@@ -410,14 +423,21 @@ private:
     // ---- tensor operators -----------------------------------------------------------------
 
     ex node(const ast::reduced_element& r) {
-        return make_reduced_element(r.op.name.name, slot(r.op.rank, qn_role::angular), slot(r.bra, qn_role::angular),
+        return make_reduced_element(r.op.name.name, rank(r.op), slot(r.bra, qn_role::angular),
                                     slot(r.ket, qn_role::angular));
+    }
+
+    // An operator's rank; the angular momentum J (model/tensor_operator.hpp) is a vector.
+    ex rank(const ast::tensor_operator& op) {
+        const ex k = slot(op.rank, qn_role::angular);
+        if (is_angular_momentum(op.name.name) && k != 1)
+            throw user_error(op.rank.offset, "J is the angular momentum, a tensor of rank 1: J^(1)");
+        return k;
     }
 
     // Held whole like a recoupling coefficient; every other use takes the Wigner-Eckart form.
     ex node(const ast::matrix_element& e) {
-        const ex j = slot(e.j, qn_role::angular), k = slot(e.op.rank, qn_role::angular),
-                 j_ket = slot(e.j_ket, qn_role::angular);
+        const ex j = slot(e.j, qn_role::angular), k = rank(e.op), j_ket = slot(e.j_ket, qn_role::angular);
         const ex m = projection_slot(e.m, j), q = projection_slot(e.component, k),
                  m_ket = projection_slot(e.m_ket, j_ket);
         return make_matrix_element(e.op.name.name, k, q, j, m, j_ket, m_ket);
@@ -427,15 +447,16 @@ private:
     // named like a recoupling coefficient's.
     ex node(const ast::coupled_matrix_element& e) {
         const auto [bra, ket] = coupled_states(e.bra, e.ket);
-        const acted_on t = operator_on(e.op, e.part, bra);
-        const ex m_bra = projection_slot(e.m, bra.label), m_ket = projection_slot(e.m_ket, ket.label),
-                 q = projection_slot(e.component, t.rank);
-        return make_coupled_element(t, q, bra, m_bra, ket, m_ket, projections_for(e.offset));
+        const auto [op, q] = element_operator(e.op, leaves_of(bra).size(), true);
+        const ex m_bra = projection_slot(e.m, bra.label), m_ket = projection_slot(e.m_ket, ket.label);
+        return make_coupled_element(op, q, bra, m_bra, ket, m_ket, projections_for(e.offset),
+                                    intermediates_for(e.offset));
     }
 
     ex node(const ast::coupled_reduced_element& e) {
         const auto [bra, ket] = coupled_states(e.bra, e.ket);
-        return make_coupled_reduced_element(operator_on(e.op, e.part, bra), bra, ket, projections_for(e.offset));
+        const ex op = element_operator(e.op, leaves_of(bra).size(), false).first;
+        return make_coupled_reduced_element(op, bra, ket, projections_for(e.offset), intermediates_for(e.offset));
     }
 
     std::pair<coupling_tree, coupling_tree> coupled_states(const ast::coupled_pair& b, const ast::coupled_pair& k) {
@@ -448,14 +469,86 @@ private:
         return {bra, ket};
     }
 
-    acted_on operator_on(const ast::tensor_operator& op, const ast::number& part, const coupling_tree& bra) {
-        const std::size_t n = leaves_of(bra).size();
-        // At most two digits: max_coupled_leaves bounds n, and stoul is not handed an overflow.
+    // The operator of an element between coupled states (model/composite_operator.hpp) and,
+    // for a matrix element, its component: written on the whole operator, never on a factor of
+    // a product, and absent from a scalar product, whose one component is 0.
+    std::pair<ex, ex> element_operator(const std::vector<ast::operator_factor>& factors, std::size_t leaves,
+                                       bool matrix) {
+        if (factors.size() > 2)
+            throw user_error(offset_of(factors[2]),
+                             "a scalar product joins two operators; couple more first, as in "
+                             "[T^(k1)(1) x U^(k2)(2)]^(k) . V^(k)(3)");
+        if (factors.size() == 2) {
+            for (const ast::operator_factor& f : factors)
+                if (component_of(f))
+                    throw user_error(offset_of(*component_of(f)),
+                                     "a scalar product has the one component 0 and is written without one");
+            const ex a = operator_expression(factors[0], leaves), b = operator_expression(factors[1], leaves);
+            if (!(rank_of(a) - rank_of(b)).expand().is_zero())
+                throw user_error(offset_of(factors[1]), "a scalar product joins two operators of one rank; found " +
+                                                            couplet::to_text(rank_of(a)) + " and " +
+                                                            couplet::to_text(rank_of(b)));
+            integer_rank(rank_of(a), offset_of(factors[0]));
+            return {make_scalar_product(a, b), 0};
+        }
+        const ast::operator_factor& f = factors[0];
+        const ex op = operator_expression(f, leaves);
+        const auto& component = component_of(f);
+        if (matrix && !component)
+            throw user_error(offset_of(f),
+                             "a matrix element names the operator's component, as in T^(k)_q(1) "
+                             "or [T^(k1)(1) x U^(k2)(2)]^(k)_q");
+        if (!matrix && component)
+            throw user_error(offset_of(*component),
+                             "a reduced matrix element has no component: "
+                             "<(j1, j2) J || T^(k)(1) || (j1', j2') J'>");
+        return {op, matrix ? projection_slot(*component, rank_of(op)) : ex(0)};
+    }
+
+    // A . B = sum_q (-1)^q A_q B_-q is defined for an integer rank (Edmonds 1957, sec. 5.1), so
+    // a rank that is a name is an integer from here on, as if declared 'int'.
+    void integer_rank(const ex& rank, std::size_t offset) {
+        const bool half = is_a<numeric>(rank)  ? !ex_to<numeric>(rank).is_integer()
+                          : is_a<symbol>(rank) ? out_.numbers.at(ex_to<symbol>(rank)).parity == qn_parity::half_odd
+                                               : false;
+        if (half)
+            throw user_error(
+                offset, "a scalar product joins operators of integer rank; " + couplet::to_text(rank) + " is half-odd");
+        if (is_a<symbol>(rank)) out_.numbers.declare_parity(ex_to<symbol>(rank).get_name(), qn_parity::integer, offset);
+    }
+
+    // The factors below the whole operator carry no component of their own.
+    ex operator_expression(const ast::operator_factor& f, std::size_t leaves, bool whole = true) {
+        if (!whole && component_of(f))
+            throw user_error(offset_of(*component_of(f)),
+                             "the component goes on the whole operator, as in [T^(k1)(1) x U^(k2)(2)]^(k)_q");
+        if (const auto* a = boost::get<ast::acted_operator>(&f.get()))
+            return make_acting_on(a->op.name.name, rank(a->op), part_number(a->part, leaves));
+        const ast::operator_product& p = boost::get<ast::x3::forward_ast<ast::operator_product>>(f.get()).get();
+        return make_tensor_product(operator_expression(p.left, leaves, false),
+                                   operator_expression(p.right, leaves, false), slot(p.rank, qn_role::angular));
+    }
+
+    static std::size_t part_number(const ast::number& part, std::size_t leaves) {
+        // At most two digits: max_coupled_leaves bounds the leaves, and stoul is not handed an overflow.
         const std::size_t p = part.digits.size() <= 2 ? std::stoul(part.digits) : 0;
-        if (p < 1 || p > n)
+        if (p < 1 || p > leaves)
             throw user_error(part.offset, "the operator acts on one part of the state: a number from 1 to " +
-                                              std::to_string(n) + ", its leaves counted from the left");
-        return {op.name.name, slot(op.rank, qn_role::angular), p};
+                                              std::to_string(leaves) + ", its leaves counted from the left");
+        return p;
+    }
+
+    // The j'' of the states between two operators on one part, named after that part's j.
+    angular_source intermediates_for(std::size_t offset) {
+        return [this, offset](const ex& like) {
+            std::string name = (is_a<symbol>(like) ? ex_to<symbol>(like).get_name() : std::string("j")) + "''";
+            while (words_of_input().count(name) || projections_of_statement_.count(name) || out_.numbers.find(name))
+                name += "'";
+            projections_of_statement_.insert(name);
+            const symbol j = out_.numbers.symbol_for(name, offset);
+            out_.numbers.assign_role(j, qn_role::angular, offset);
+            return ex(j);
+        };
     }
 
     projection_source projections_for(std::size_t offset) {

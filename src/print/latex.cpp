@@ -114,10 +114,11 @@ protected:
 
     // The trade's notation: \langle a \| T^{(k)} \| b \rangle, \langle j\, m \mid T^{(k)}_{q} \mid j'\, m' \rangle.
     element_layout element_brackets() override { return {"\\langle ", " \\mid ", " \\| ", " \\rangle", "\\, "}; }
-    std::string operator_symbol(const std::string& name, const ex& rank, const ex* component) override {
-        return latex_identifier(name) + "^{(" + write(rank).text + ")}" +
-               (component ? "_{" + write(*component).text + "}" : "");
+    std::string operator_identifier(const std::string& name) override { return latex_identifier(name); }
+    std::string rank_marks(const ex& rank, const ex* component) override {
+        return "^{(" + write(rank).text + ")}" + (component ? "_{" + write(*component).text + "}" : "");
     }
+    product_layout product_signs() override { return {"\\bigl[ ", " \\times ", " \\bigr]", " \\cdot "}; }
     std::string element_entry(const ex& e) override { return at_least(e, level::product); }
 
     // Edmonds' layout (ch. 6): the two coupled states in one angle bracket.

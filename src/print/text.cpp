@@ -62,9 +62,11 @@ protected:
 
     // As written: <a || T^(k) || b>, <j m | T^(k)_q | j' m'>.
     element_layout element_brackets() override { return {"<", " | ", " || ", ">", " "}; }
-    std::string operator_symbol(const std::string& name, const ex& rank, const ex* component) override {
-        return name + "^(" + write(rank).text + ")" + (component ? "_" + cg_entry(*component) : "");
+    std::string operator_identifier(const std::string& name) override { return name; }
+    std::string rank_marks(const ex& rank, const ex* component) override {
+        return "^(" + write(rank).text + ")" + (component ? "_" + cg_entry(*component) : "");
     }
+    product_layout product_signs() override { return {"[", " x ", "]", " . "}; }
     std::string element_entry(const ex& e) override { return cg_entry(e); }
 
     printed sum_over(const ex& s) override {

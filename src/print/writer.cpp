@@ -4,6 +4,7 @@
 #include <sstream>
 #include <tuple>
 
+#include "model/composite_operator.hpp"
 #include "model/coupled_element.hpp"
 #include "model/coupling_tree.hpp"
 #include "model/readable_order.hpp"
@@ -162,23 +163,34 @@ printed writer::recoupling(const ex& e) {
 
 printed writer::tensor_element(const ex& e) {
     const element_layout l = element_brackets();
-    const std::string name = operator_of(e);
     auto entry = [&](size_t i) { return element_entry(e.op(i)); };
     auto state = [&](size_t tree) { return coupled(e.op(tree), recoupling_brackets()); };
-    auto part = [&](size_t i) { return "(" + write(e.op(i)).text + ")"; };
-    const ex component = e.op(2);
     std::string text;
     if (is_reduced_element(e))
-        text = entry(2) + l.double_bar + operator_symbol(name, e.op(1), nullptr) + l.double_bar + entry(3);
-    else if (is_matrix_element(e))
-        text = entry(3) + l.gap + entry(4) + l.bar + operator_symbol(name, e.op(1), &component) + l.bar + entry(5) +
-               l.gap + entry(6);
-    else if (is_coupled_reduced_element(e))
-        text = state(3) + l.double_bar + operator_symbol(name, e.op(1), nullptr) + part(2) + l.double_bar + state(4);
-    else
-        text = state(4) + l.gap + entry(5) + l.bar + operator_symbol(name, e.op(1), &component) + part(3) + l.bar +
-               state(6) + l.gap + entry(7);
+        text = entry(2) + l.double_bar + operator_symbol(operator_of(e), e.op(1), nullptr) + l.double_bar + entry(3);
+    else if (is_matrix_element(e)) {
+        const ex component = e.op(2);
+        text = entry(3) + l.gap + entry(4) + l.bar + operator_symbol(operator_of(e), e.op(1), &component) + l.bar +
+               entry(5) + l.gap + entry(6);
+    } else if (is_coupled_reduced_element(e))
+        text = state(1) + l.double_bar + operator_expression(e.op(0), nullptr) + l.double_bar + state(2);
+    else {
+        const ex component = e.op(1);
+        text = state(2) + l.gap + entry(3) + l.bar + operator_expression(e.op(0), &component) + l.bar + state(4) +
+               l.gap + entry(5);
+    }
     return {l.open + text + l.close, level::atom};
+}
+
+// T^(k)_q(1), [T^(k1)(1) x U^(k2)(2)]^(k)_q, T^(k)(1) . U^(k)(2): the component on the whole
+// operator only; a scalar's, 0, is not written.
+std::string writer::operator_expression(const ex& op, const ex* component) {
+    if (is_acting_on(op)) return operator_symbol(name_of(op), op.op(1), component) + "(" + write(op.op(2)).text + ")";
+    const product_layout p = product_signs();
+    if (is_scalar_product(op))
+        return operator_expression(op.op(0), nullptr) + p.dot + operator_expression(op.op(1), nullptr);
+    return p.open + operator_expression(op.op(0), nullptr) + p.times + operator_expression(op.op(1), nullptr) +
+           p.close + rank_marks(op.op(2), component);
 }
 
 std::string writer::coupled(const ex& held, const recoupling_layout& layout) {

@@ -61,7 +61,17 @@ protected:
     };
     virtual element_layout element_brackets() = 0;
     // T^(k), with its component when there is one.
-    virtual std::string operator_symbol(const std::string& name, const GiNaC::ex& rank, const GiNaC::ex* component) = 0;
+    std::string operator_symbol(const std::string& name, const GiNaC::ex& rank, const GiNaC::ex* component) {
+        return operator_identifier(name) + rank_marks(rank, component);
+    }
+    virtual std::string operator_identifier(const std::string& name) = 0;
+    // ^(k)_q, or ^(k) without a component.
+    virtual std::string rank_marks(const GiNaC::ex& rank, const GiNaC::ex* component) = 0;
+    // [A x B] and A . B (model/composite_operator.hpp).
+    struct product_layout {
+        std::string open, times, close, dot;
+    };
+    virtual product_layout product_signs() = 0;
     // A j or m inside an element.
     virtual std::string element_entry(const GiNaC::ex& e) = 0;
 
@@ -69,6 +79,7 @@ private:
     printed recoupling(const GiNaC::ex& e);
     std::string coupled(const GiNaC::ex& held, const recoupling_layout& layout);
     printed tensor_element(const GiNaC::ex& e);
+    std::string operator_expression(const GiNaC::ex& op, const GiNaC::ex* component);
     printed sum(const GiNaC::ex& e);
     printed product(const GiNaC::ex& e);
     std::string join_factors(const std::vector<GiNaC::ex>& factors, const GiNaC::numeric& coefficient);
