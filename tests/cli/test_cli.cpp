@@ -84,7 +84,7 @@ TEST_CASE("the help text states the commands and the conventions", "[cli]") {
 }
 
 TEST_CASE("the bundled examples run", "[cli][examples]") {
-    for (const char* name : {"/examples/p_electron_coupling.cpl"}) {
+    for (const char* name : {"/examples/p_electron_coupling.cpl", "/examples/orbit_nucleus_coupling.cpl"}) {
         auto r = run_cli({"eval", std::string(COUPLET_SOURCE_DIR) + name});
         INFO(r.err);
         CHECK(r.code == 0);

@@ -53,3 +53,15 @@ TEST_CASE("J is a vector", "[tensor][angular-momentum][cli]") {
     CHECK(r.code == 2);
     CHECK_THAT(r.err, Catch::Contains("1:10") && Catch::Contains("rank 1"));
 }
+
+TEST_CASE("the projection theorem and the Lande factor", "[tensor][angular-momentum][cli]") {
+    // The projection theorem (common practice, no source): within one j, a vector operator
+    // acts as <V . j> j / (j(j+1)).  So on |((l s) j, i) F M>, l . i = <l . j> <j . i> / (j(j+1)),
+    // with 2 <l . j> = j(j+1) + l(l+1) - s(s+1) and 2 <j . i> = F(F+1) - j(j+1) - i(i+1).
+    CHECK(check("<((l, s) j, i) F M | J^(1)(1) . J^(1)(3) | ((l, s) j, i) F M> == tri(l, s, j) * tri(j, i, F) * "
+                "(j*(j+1) + l*(l+1) - s*(s+1)) * (F*(F+1) - j*(j+1) - i*(i+1)) / (4*j*(j+1))") == 0);
+    // The Lande factor with the spin's g = 2 (from memory):
+    //   <(l s) j m | l_z + 2 s_z | (l s) j m> = m (1 + (j(j+1) + s(s+1) - l(l+1)) / (2 j (j+1))).
+    CHECK(check("<(l, s) j m | J^(1)_0(1) | (l, s) j m> + 2 * <(l, s) j m | J^(1)_0(2) | (l, s) j m> == "
+                "tri(l, s, j) * m * (1 + (j*(j+1) + s*(s+1) - l*(l+1)) / (2*j*(j+1)))") == 0);
+}
