@@ -8,26 +8,13 @@
 
 #include "rules/cli_simplify.hpp"
 #include "support.hpp"
+#include "tensor/element_checks.hpp"
 
+using couplet::testing::check_equal;
 using couplet::testing::count_of;
 using couplet::testing::require_exact;
 using couplet::testing::simplify_and_compare;
-
-namespace {
-
-int check(const std::string& element, const std::string& closed_form) {
-    auto r = couplet::testing::run_cli({"check", "-e", element + " == " + closed_form});
-    INFO(element << " == " << closed_form << "\n" << r.out << r.err);
-    return r.code;
-}
-
-std::string error_of(const std::string& text) {
-    auto r = couplet::testing::run_cli({"simplify", "-e", text});
-    CHECK(r.code == 2);
-    return r.err;
-}
-
-}  // namespace
+using couplet::testing::simplify_error;
 
 TEST_CASE("a tensor product of operators on two parts: Edmonds 7.1.5", "[tensor][composite][cli]") {
     // Edmonds (1957) eq. 7.1.5: <j1 j2 J || [T^(k1)(1) x U^(k2)(2)]^(k) || j1' j2' J'> =
@@ -36,7 +23,7 @@ TEST_CASE("a tensor product of operators on two parts: Edmonds 7.1.5", "[tensor]
     const std::string edmonds =
         "sqrt((2*J+1)*(2*J'+1)*(2*k+1)) * 9j{j1, j1', k1; j2, j2', k2; J, J', k} * "
         "<j1 || T^(k1) || j1'> * <j2 || U^(k2) || j2'>";
-    CHECK(check(element, edmonds) == 0);
+    CHECK(check_equal(element, edmonds) == 0);
     // simplify derives the one-term form: one 9j, no sum.
     auto s = simplify_and_compare("", element);
     require_exact(s);
@@ -44,8 +31,8 @@ TEST_CASE("a tensor product of operators on two parts: Edmonds 7.1.5", "[tensor]
     CHECK(count_of(s.text, "sum(") == 0);
     CHECK(count_of(s.text, " + ") == 0);
     // The m-dependent element is its Wigner-Eckart form (Edmonds 5.4.1).
-    CHECK(check("<(j1, j2) J M | [T^(k1)(1) x U^(k2)(2)]^(k)_q | (j1', j2') J' M'>",
-                "(-1)^(J-M) * 3j(J, k, J'; -M, q, M') * " + edmonds) == 0);
+    CHECK(check_equal("<(j1, j2) J M | [T^(k1)(1) x U^(k2)(2)]^(k)_q | (j1', j2') J' M'>",
+                      "(-1)^(J-M) * 3j(J, k, J'; -M, q, M') * " + edmonds) == 0);
 }
 
 TEST_CASE("a scalar product of operators on two parts: Edmonds 7.1.6", "[tensor][composite][cli]") {
@@ -53,10 +40,10 @@ TEST_CASE("a scalar product of operators on two parts: Edmonds 7.1.6", "[tensor]
     //   delta(J, J') delta(M, M') (-1)^(j1'+j2+J) {J j2 j1; k j1' j2'} <j1 || T || j1'> <j2 || U || j2'>.
     const std::string edmonds =
         "delta(J, J') * (-1)^(j1'+j2+J) * 6j{J, j2, j1; k, j1', j2'} * <j1 || T^(k) || j1'> * <j2 || U^(k) || j2'>";
-    CHECK(check("<(j1, j2) J M | T^(k)(1) . U^(k)(2) | (j1', j2') J' M'>", "delta(M, M') * " + edmonds) == 0);
+    CHECK(check_equal("<(j1, j2) J M | T^(k)(1) . U^(k)(2) | (j1', j2') J' M'>", "delta(M, M') * " + edmonds) == 0);
     // A scalar's reduced element: Edmonds 5.4.1 with k = 0, (-1)^(J-M) 3j(J 0 J; -M 0 M) =
     // 1/sqrt(2J+1) (DLMF 34.3.1 with a zero entry, from memory as 34.3.1's special case).
-    CHECK(check("<(j1, j2) J || T^(k)(1) . U^(k)(2) || (j1', j2') J'>", "sqrt(2*J+1) * " + edmonds) == 0);
+    CHECK(check_equal("<(j1, j2) J || T^(k)(1) . U^(k)(2) || (j1', j2') J'>", "sqrt(2*J+1) * " + edmonds) == 0);
     // The shape from the reduced element (few random points satisfy both deltas of the other).
     auto s = simplify_and_compare("", "<(j1, j2) J || T^(k)(1) . U^(k)(2) || (j1', j2') J'>");
     require_exact(s);
@@ -74,7 +61,7 @@ TEST_CASE("two operators on one part: Edmonds 7.1.1 inside 7.1.7", "[tensor][com
         "(-1)^(j1+j2+J'+k) * sqrt((2*J+1)*(2*J'+1)) * 6j{j1, J, j2; J', j1', k} * "
         "(-1)^(j1+k+j1') * sqrt(2*k+1) * sum(x : 6j{k1, k2, k; j1', j1, x} * "
         "<j1 || T^(k1) || x> * <x || U^(k2) || j1'>)";
-    CHECK(check("<(j1, j2) J || [T^(k1)(1) x U^(k2)(1)]^(k) || (j1', j2) J'>", edmonds) == 0);
+    CHECK(check_equal("<(j1, j2) J || [T^(k1)(1) x U^(k2)(1)]^(k) || (j1', j2) J'>", edmonds) == 0);
     // The intermediate j'' stays a sum: the reduced elements at each j'' are unknown.
     auto s = simplify_and_compare("", "<(j1, j2) J || [T^(k1)(1) x U^(k2)(1)]^(k) || (j1', j2) J'>");
     require_exact(s);
@@ -98,19 +85,19 @@ TEST_CASE("composite operators print in the trade's notation", "[tensor][composi
 }
 
 TEST_CASE("a composite operator that cannot be read says where and why", "[tensor][composite][cli]") {
-    CHECK_THAT(error_of("<(a, b) J M | [T^(1)(1) x U^(1)(2)]^(1) | (a, b) J M'>"),
+    CHECK_THAT(simplify_error("<(a, b) J M | [T^(1)(1) x U^(1)(2)]^(1) | (a, b) J M'>"),
                Catch::Contains("1:15") && Catch::Contains("names the operator's component"));
-    CHECK_THAT(error_of("<(a, b) J || [T^(1)_q(1) x U^(1)(2)]^(1) || (a, b) J>"),
+    CHECK_THAT(simplify_error("<(a, b) J || [T^(1)_q(1) x U^(1)(2)]^(1) || (a, b) J>"),
                Catch::Contains("1:21") && Catch::Contains("the component goes on the whole operator"));
-    CHECK_THAT(error_of("<(a, b) J || T^(1)(1) . U^(2)(2) || (a, b) J>"),
+    CHECK_THAT(simplify_error("<(a, b) J || T^(1)(1) . U^(2)(2) || (a, b) J>"),
                Catch::Contains("1:25") && Catch::Contains("of one rank"));
-    CHECK_THAT(error_of("<(a, b) J || T^(1/2)(1) . U^(1/2)(2) || (a, b) J>"), Catch::Contains("integer rank"));
-    CHECK_THAT(error_of("<(a, b) J M | T^(1)(1) . U^(1)_0(2) | (a, b) J M>"),
+    CHECK_THAT(simplify_error("<(a, b) J || T^(1/2)(1) . U^(1/2)(2) || (a, b) J>"), Catch::Contains("integer rank"));
+    CHECK_THAT(simplify_error("<(a, b) J M | T^(1)(1) . U^(1)_0(2) | (a, b) J M>"),
                Catch::Contains("1:32") && Catch::Contains("written without one"));
-    CHECK_THAT(error_of("<(a, b) J || T^(1)_q(1) || (a, b) J>"),
+    CHECK_THAT(simplify_error("<(a, b) J || T^(1)_q(1) || (a, b) J>"),
                Catch::Contains("1:20") && Catch::Contains("has no component"));
-    CHECK_THAT(error_of("<(a, b) J || T^(1)(1) . U^(1)(2) . V^(1)(1) || (a, b) J>"),
+    CHECK_THAT(simplify_error("<(a, b) J || T^(1)(1) . U^(1)(2) . V^(1)(1) || (a, b) J>"),
                Catch::Contains("1:36") && Catch::Contains("joins two operators"));
-    CHECK_THAT(error_of("<(a, b) J || [T^(1)(1) y U^(1)(2)]^(1) || (a, b) J>"),
+    CHECK_THAT(simplify_error("<(a, b) J || [T^(1)(1) y U^(1)(2)]^(1) || (a, b) J>"),
                Catch::Contains("1:24") && Catch::Contains("expected 'x'"));
 }
