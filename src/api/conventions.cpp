@@ -60,6 +60,8 @@ Language (one statement per line or separated by ';'; '#' starts a comment):
   J^(1)                        the angular momentum of its part: J_0 = J_z, J_+-1 = -+J+-/sqrt(2)
                                with the ladder coefficients, <j || J^(1) || j'> = delta(j, j')
                                sqrt(j(j+1)(2j+1))
+  C^(k)                        Racah's spherical harmonic sqrt(4 pi/(2k+1)) Y_kq (k an integer):
+                               <l || C^(k) || l'> = (-1)^l sqrt((2l+1)(2l'+1)) 3j(l, k, l'; 0, 0, 0)
 
 Answers are written as a textbook prints them: weights like (2J+1) kept whole, like terms
 collected, a triangle condition tri(a, b, c) only where no 3j/6j/9j of the same product

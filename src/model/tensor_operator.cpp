@@ -24,9 +24,12 @@ REGISTER_FUNCTION(reduced_element, dummy())
 REGISTER_FUNCTION(matrix_element, dummy())
 
 bool is_angular_momentum(const std::string& op) { return op == "J"; }
+bool is_racah_harmonic(const std::string& op) { return op == "C"; }
 
 ex make_reduced_element(const std::string& op, const ex& rank, const ex& bra, const ex& ket) {
     if (is_angular_momentum(op)) return kdelta(bra, ket) * sqrt(bra * (bra + 1) * (2 * bra + 1));
+    if (is_racah_harmonic(op))
+        return make_phase(bra) * sqrt((2 * bra + 1) * (2 * ket + 1)) * wigner3j(bra, rank, ket, 0, 0, 0);
     return reduced_element(operator_name(op), rank, bra, ket).hold();
 }
 

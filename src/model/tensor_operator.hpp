@@ -33,13 +33,18 @@ DECLARE_FUNCTION_4P(reduced_element)
 // matrix_element(T, k, q, j, m, j', m') = <j m | T^(k)_q | j' m'>.
 DECLARE_FUNCTION_7P(matrix_element)
 
-// The one operator couplet knows by its definition: J^(1), the angular momentum of the part it
-// acts on, whose spherical components J_{+1} = -J+/sqrt(2), J_0 = J_z, J_{-1} = J-/sqrt(2) act
-// by the Condon-Shortley ladder coefficients; its reduced element is
-//   <j || J^(1) || j'> = delta(j, j') sqrt(j (j+1) (2j+1))       (Edmonds 1957, eq. 5.4.3).
+// The operators couplet knows by their definitions, whose reduced elements are closed forms:
+// - J^(1), the angular momentum of the part it acts on, whose spherical components
+//   J_{+1} = -J+/sqrt(2), J_0 = J_z, J_{-1} = J-/sqrt(2) act by the Condon-Shortley ladder
+//   coefficients: <j || J^(1) || j'> = delta(j, j') sqrt(j (j+1) (2j+1))   (Edmonds 1957, eq. 5.4.3);
+// - C^(k), Racah's normalized spherical harmonic C^(k)_q = sqrt(4 pi / (2k+1)) Y_kq of the
+//   orbit (Condon-Shortley phase), k an integer:
+//   <l || C^(k) || l'> = (-1)^l sqrt((2l+1)(2l'+1)) 3j(l, k, l'; 0, 0, 0)   (Edmonds 1957, sec. 5.4, from memory;
+//   tests/tensor/test_racah_harmonic.cpp checks it by quadrature over the sphere).
 bool is_angular_momentum(const std::string& op);
+bool is_racah_harmonic(const std::string& op);
 
-// <a || T^(k) || b>, held; for J^(1) its value above.
+// <a || T^(k) || b>, held; for J^(1) and C^(k) their values above.
 GiNaC::ex make_reduced_element(const std::string& op, const GiNaC::ex& rank, const GiNaC::ex& bra,
                                const GiNaC::ex& ket);
 GiNaC::ex make_matrix_element(const std::string& op, const GiNaC::ex& rank, const GiNaC::ex& component,

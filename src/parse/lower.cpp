@@ -432,6 +432,8 @@ private:
         const ex k = slot(op.rank, qn_role::angular);
         if (is_angular_momentum(op.name.name) && k != 1)
             throw user_error(op.rank.offset, "J is the angular momentum, a tensor of rank 1: J^(1)");
+        if (is_racah_harmonic(op.name.name))
+            integer_rank(k, op.rank.offset, "C^(k) is a spherical harmonic, of integer rank");
         return k;
     }
 
@@ -488,7 +490,7 @@ private:
                 throw user_error(offset_of(factors[1]), "a scalar product joins two operators of one rank; found " +
                                                             couplet::to_text(rank_of(a)) + " and " +
                                                             couplet::to_text(rank_of(b)));
-            integer_rank(rank_of(a), offset_of(factors[0]));
+            integer_rank(rank_of(a), offset_of(factors[0]), "a scalar product joins operators of integer rank");
             return {make_scalar_product(a, b), 0};
         }
         const ast::operator_factor& f = factors[0];
@@ -505,15 +507,14 @@ private:
         return {op, matrix ? projection_slot(*component, rank_of(op)) : ex(0)};
     }
 
-    // A . B = sum_q (-1)^q A_q B_-q is defined for an integer rank (Edmonds 1957, sec. 5.1), so
-    // a rank that is a name is an integer from here on, as if declared 'int'.
-    void integer_rank(const ex& rank, std::size_t offset) {
+    // Some ranks are integers by definition: a scalar product's, A . B = sum_q (-1)^q A_q B_-q
+    // (Edmonds 1957, sec. 5.1), and C^(k)'s.  A rank that is a name is then an integer from
+    // here on, as if declared 'int'.
+    void integer_rank(const ex& rank, std::size_t offset, const std::string& why) {
         const bool half = is_a<numeric>(rank)  ? !ex_to<numeric>(rank).is_integer()
                           : is_a<symbol>(rank) ? out_.numbers.at(ex_to<symbol>(rank)).parity == qn_parity::half_odd
                                                : false;
-        if (half)
-            throw user_error(
-                offset, "a scalar product joins operators of integer rank; " + couplet::to_text(rank) + " is half-odd");
+        if (half) throw user_error(offset, why + "; " + couplet::to_text(rank) + " is half-odd");
         if (is_a<symbol>(rank)) out_.numbers.declare_parity(ex_to<symbol>(rank).get_name(), qn_parity::integer, offset);
     }
 
